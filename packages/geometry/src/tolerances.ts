@@ -1,0 +1,21 @@
+/**
+ * Named tolerances, each with its physical meaning. Functions that compare
+ * floats take an `eps` option defaulting to one of these; nothing is global or
+ * mutable.
+ */
+
+/**
+ * Relative tolerance for deciding that a quadratic's discriminant is zero,
+ * i.e. that a generator line just grazes a surface (tangent). Relative to the
+ * square of the surface's size. 1e-12 of R² is a graze within about 1e-6 R.
+ */
+export const TANGENCY_REL_EPS = 1e-12;
+
+/** Default chord tolerance for sampled contours, mm: the largest distance between the true curve and a straight segment of the drawing. */
+export const DEFAULT_CHORD_TOLERANCE_MM = 0.05;
+
+/** Angles below this many degrees between a branch and its header get a warning: the crotch becomes a long feather edge that is hard to fit and weld. */
+export const SHALLOW_LATERAL_WARN_DEG = 15;
+
+/** Geometry closer than this (mm) is treated as touching; 1 nm, far below any shop measurement. */
+export const LENGTH_EPS_MM = 1e-6;
