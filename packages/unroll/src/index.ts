@@ -1,1 +1,3 @@
 export * from './types.js';
+export * from './wrap/sample-cut.js';
+export * from './wrap/develop-wrap.js';
