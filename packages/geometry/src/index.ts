@@ -3,3 +3,4 @@ export * from './types.js';
 export * from './tolerances.js';
 export * from './generators.js';
 export * from './surfaces/line-intersection.js';
+export * from './cone/index.js';

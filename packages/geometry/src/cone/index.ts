@@ -1,0 +1,4 @@
+export * from './types.js';
+export * from './frustum.js';
+export * from './apex-angle.js';
+export * from './sheet.js';

@@ -1,0 +1,80 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { isGirthError } from '@girth/pipes';
+import { frustumElement, makeConeFrustum } from './frustum.js';
+import { makeConeSheet, maxEndShiftFactor, maxPlateThicknessMm, sheetElement } from './sheet.js';
+import { distanceToCone, expectNear, reducerArb } from './test-support/cone-checks.js';
+
+const len = (a: readonly number[], b: readonly number[]): number => Math.hypot(a[0]! - b[0]!, a[1]! - b[1]!, a[2]! - b[2]!);
+
+describe('mean surface of a rolled cone', () => {
+  it('concentric: the mean end radius is R − (t/2) / cos(half angle), and the mean cone lies t/2 inside (invariant)', () => {
+    // The rule of sheet.ts, checked against a brute-force distance to the outside cone.
+    fc.assert(
+      fc.property(reducerArb, fc.double({ min: 0, max: 0.9, noNaN: true }), fc.double({ min: 0, max: 6.2, noNaN: true }), (c, tf, theta) => {
+        const R = c.largeDiameterMm / 2;
+        const r = c.smallDiameterMm / 2;
+        const f = makeConeFrustum({ largeRadiusMm: R, smallRadiusMm: r, lengthMm: c.lengthMm });
+        const t = tf * maxPlateThicknessMm(f, 'outside');
+        const m = sheetElement(makeConeSheet(f, t, 'outside'), theta);
+        const cosA = c.lengthMm / Math.hypot(c.lengthMm, R - r);
+        expectNear(Math.hypot(m.large[0], m.large[1]), R - t / 2 / cosA, 1e-9 * R, 'mean large radius');
+        expectNear(Math.hypot(m.small[0], m.small[1]), r - t / 2 / cosA, 1e-9 * R, 'mean small radius');
+        expectNear(distanceToCone(m.large, R, r, c.lengthMm, 0), t / 2, 1e-7 * R, 'distance to outside');
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('eccentric: each mean end point lies t/2 from the outside cone and in its end plane; elements keep their true length', () => {
+    fc.assert(
+      fc.property(reducerArb, fc.double({ min: 0, max: 0.9, noNaN: true }), fc.double({ min: 0, max: 6.2, noNaN: true }), (c, tf, theta) => {
+        const R = c.largeDiameterMm / 2;
+        const r = c.smallDiameterMm / 2;
+        const f = makeConeFrustum({ largeRadiusMm: R, smallRadiusMm: r, lengthMm: c.lengthMm, offsetMm: R - r });
+        const t = tf * maxPlateThicknessMm(f, 'outside');
+        const m = sheetElement(makeConeSheet(f, t, 'outside'), theta);
+        const g = frustumElement(f, theta);
+        expect(m.large[2]).toBe(0);
+        expect(m.small[2]).toBe(c.lengthMm);
+        expectNear(distanceToCone(m.large, R, r, c.lengthMm, R - r), t / 2, 1e-7 * R, 'large end to outside');
+        expectNear(distanceToCone(m.small, R, r, c.lengthMm, R - r), t / 2, 1e-7 * R, 'small end to outside');
+        expectNear(len(m.large, m.small), len(g.large, g.small), 1e-9 * R, 'element length');
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('eccentric: the flat side stays flat and moves t/2 in; inside diameters move the mean surface out', () => {
+    const f = makeConeFrustum({ largeRadiusMm: 150, smallRadiusMm: 80, lengthMm: 250, offsetMm: 70 });
+    const m = sheetElement(makeConeSheet(f, 10, 'outside'), 0);
+    expectNear(m.large[0], 145, 1e-12, 'flat side large x');
+    expectNear(m.small[0], 145, 1e-12, 'flat side small x');
+    const i = sheetElement(makeConeSheet(f, 10, 'inside'), 0);
+    expectNear(i.large[0], 155, 1e-12, 'inside given: mean is outward');
+    expect(sheetElement(makeConeSheet(f, 10, 'mean'), 1)).toEqual(frustumElement(f, 1));
+  });
+
+  it('concentric: the largest end shift factor is 1 / cos(half angle)', () => {
+    const f = makeConeFrustum({ largeRadiusMm: 2, smallRadiusMm: 1, lengthMm: 1 });
+    expectNear(maxEndShiftFactor(f), Math.SQRT2, 1e-12, 'factor');
+  });
+
+  it('plate too thick for the small end: WALL_TOO_THICK on thicknessMm, with the limit in the message', () => {
+    const f = makeConeFrustum({ largeRadiusMm: 100, smallRadiusMm: 10, lengthMm: 200 });
+    const limit = maxPlateThicknessMm(f, 'outside');
+    expect(limit).toBeLessThan(10);
+    expect(() => makeConeSheet(f, limit * 0.999, 'outside')).not.toThrow();
+    try {
+      makeConeSheet(f, limit, 'outside');
+      expect.unreachable();
+    } catch (e) {
+      expect(isGirthError(e, 'WALL_TOO_THICK')).toBe(true);
+      expect((e as { field: string }).field).toBe('thicknessMm');
+      expect((e as Error).message).toContain(limit.toFixed(3));
+    }
+    expect(() => makeConeSheet(f, 50, 'inside')).not.toThrow();
+    expect(() => makeConeSheet(f, -1, 'outside')).toThrow(/thicknessMm/);
+    expect(() => makeConeSheet(f, 1, 'middle' as never)).toThrow(/diametersAt/);
+  });
+});

@@ -1,0 +1,126 @@
+/**
+ * The mean surface of a cone rolled from plate.
+ *
+ * Rule: a flat pattern is developed on the mean surface of the plate, which
+ * lies half the plate thickness from the outside (or inside) surface, measured
+ * square to the cone surface. Moving a cone's surface square to itself moves
+ * each element parallel to itself; cut by the same end planes, the element
+ * keeps its true length and its end points move sideways in the end planes by
+ * (t/2) · sqrt(1 + (n_z |element| / L)²), where n_z is the axial part of the
+ * unit normal. For a concentric cone of half-apex angle a that is (t/2) / cos a
+ * radially at both ends; on the flat side of an eccentric cone it is t/2.
+ */
+import { GirthError, requireNonNegative } from '@girth/pipes';
+import { addScaled, norm, sub } from '../vec3.js';
+import { frustumElement, frustumNormal } from './frustum.js';
+import type { ConeElement, ConeFrustum, ConeSheet, DiameterSurface } from './types.js';
+
+const SHIFT_SAMPLES = 3600;
+
+/**
+ * The largest sideways move of an element's end, per mm of move square to the
+ * surface, over all elements of `frustum` (≥ 1). For a concentric cone it is
+ * 1 / cos(half-apex angle); for an eccentric one it is largest opposite the flat side.
+ * @example maxEndShiftFactor(makeConeFrustum({ largeRadiusMm: 2, smallRadiusMm: 1, lengthMm: 1 })) // √2
+ */
+export function maxEndShiftFactor(frustum: ConeFrustum): number {
+  let worst = 1;
+  for (let i = 0; i <= SHIFT_SAMPLES; i++) {
+    const thetaRad = (2 * Math.PI * i) / SHIFT_SAMPLES;
+    worst = Math.max(worst, endShiftFactor(frustum, thetaRad));
+  }
+  return worst;
+}
+
+function endShiftFactor(frustum: ConeFrustum, thetaRad: number): number {
+  const e = frustumElement(frustum, thetaRad);
+  const n = frustumNormal(frustum, thetaRad);
+  const k = (n[2] * norm(sub(e.small, e.large))) / frustum.lengthMm;
+  return Math.sqrt(1 + k * k);
+}
+
+/**
+ * The thickest plate (mm, exclusive) that `given` can be rolled from when its
+ * end diameters belong to `diametersAt`: the inside surface must keep a small
+ * end, so the largest sideways move of the small end's edge toward the axis
+ * must stay below the small radius. Infinity when the inside itself was given.
+ * @example maxPlateThicknessMm(frustum, 'outside')
+ */
+export function maxPlateThicknessMm(given: ConeFrustum, diametersAt: DiameterSurface): number {
+  const f = maxEndShiftFactor(given);
+  switch (diametersAt) {
+    case 'outside':
+      return given.smallRadiusMm / f;
+    case 'mean':
+      return (2 * given.smallRadiusMm) / f;
+    case 'inside':
+      return Infinity;
+  }
+}
+
+/**
+ * The mean surface of a cone rolled from plate `thicknessMm` thick whose end
+ * diameters on the `diametersAt` surface are those of `given`.
+ *
+ * @param thicknessMm plate thickness, mm, ≥ 0 and below {@link maxPlateThicknessMm}.
+ * @throws GirthError `NEGATIVE`/`NOT_A_NUMBER`/`NOT_FINITE` for a bad thickness,
+ *   `WALL_TOO_THICK` (field `thicknessMm`) when the plate leaves no inside surface,
+ *   `BAD_OPTION` (field `diametersAt`) for an unknown surface.
+ * @example makeConeSheet(frustum, 6, 'outside').normalShiftMm // -3
+ */
+export function makeConeSheet(given: ConeFrustum, thicknessMm: number, diametersAt: DiameterSurface = 'outside'): ConeSheet {
+  const t = requireNonNegative(thicknessMm, 'thicknessMm');
+  let normalShiftMm: number;
+  switch (diametersAt) {
+    case 'outside':
+      normalShiftMm = -t / 2;
+      break;
+    case 'inside':
+      normalShiftMm = t / 2;
+      break;
+    case 'mean':
+      normalShiftMm = 0;
+      break;
+    default:
+      throw new GirthError(
+        'BAD_OPTION',
+        'diametersAt',
+        `diametersAt: must be 'outside', 'inside' or 'mean', got ${String(diametersAt)}`,
+        diametersAt,
+      );
+  }
+  const limit = maxPlateThicknessMm(given, diametersAt);
+  if (!(t < limit)) {
+    throw new GirthError(
+      'WALL_TOO_THICK',
+      'thicknessMm',
+      `thicknessMm: ${t} mm plate leaves no inside surface at the small end (${diametersAt} diameter ` +
+        `${(2 * given.smallRadiusMm).toFixed(3)} mm); it must be thinner than ${limit.toFixed(3)} mm`,
+      thicknessMm,
+    );
+  }
+  return { kind: 'cone-sheet', given, diametersAt, thicknessMm: t, normalShiftMm };
+}
+
+/**
+ * The element of the mean surface of `sheet` at station angle `thetaRad`, with
+ * its ends in the end planes z = 0 and z = L (mm). It is parallel to the given
+ * surface's element at the same angle and exactly as long.
+ * @example sheetElement(makeConeSheet(f, 0), 0).large // frustumElement(f, 0).large
+ */
+export function sheetElement(sheet: ConeSheet, thetaRad: number): ConeElement {
+  const e = frustumElement(sheet.given, thetaRad);
+  const h = sheet.normalShiftMm;
+  if (h === 0) return e;
+  const n = frustumNormal(sheet.given, thetaRad);
+  const u = sub(e.small, e.large);
+  // Move by h along the normal, then slide along the element back into the end plane.
+  const slide = (-h * n[2]) / u[2];
+  const shift = addScaled([n[0] * h, n[1] * h, n[2] * h], u, slide);
+  return {
+    kind: 'cone-element',
+    thetaRad,
+    large: [e.large[0] + shift[0], e.large[1] + shift[1], 0],
+    small: [e.small[0] + shift[0], e.small[1] + shift[1], sheet.given.lengthMm],
+  };
+}
