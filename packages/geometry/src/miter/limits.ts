@@ -1,0 +1,15 @@
+/**
+ * Limits of miter elbows, each with its meaning.
+ */
+
+/** Most welds a miter elbow may have; past this the pieces get shorter than anyone cuts. */
+export const MAX_MITER_WELDS = 90;
+
+/**
+ * ASME B31.3 para. 304.2.3: for multiple miters the cut angle (the change of
+ * direction at a joint divided by two) is at most 22.5°. Degrees.
+ */
+export const B31_3_MULTIPLE_MITER_MAX_CUT_DEG = 22.5;
+
+/** Slack when comparing a cut angle with a code limit, degrees: far below any protractor. */
+export const CUT_ANGLE_EPS_DEG = 1e-9;

@@ -1,0 +1,113 @@
+/**
+ * Checks a miter spec and resolves its choices (welds or pieces, radius in mm
+ * or in nominal sizes).
+ */
+import { GirthError, requireFinite, requireInRange, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
+import { fitRadiusMm, type CutFitSurface } from '../plane-cut/fit-surface.js';
+import { resolvePipeSection, type ResolvedPipeSection } from '../plane-cut/pipe-section-input.js';
+import { MAX_MITER_WELDS } from './limits.js';
+import type { MiterSpec, ResolvedMiterSpec } from './types.js';
+
+/** Millimetres in one inch (exact by definition). */
+const MM_PER_IN = 25.4;
+
+/**
+ * Checks a {@link MiterSpec} and resolves it: the number of welds, the cut
+ * angle, the centreline radius in mm, the tangent and the fit surface.
+ *
+ * @throws GirthError
+ *  - `OUT_OF_RANGE` (`bendDeg`) for a bend outside (0, 180];
+ *  - `BAD_OPTION` (`welds`/`pieces`) when both or neither are given;
+ *  - `OUT_OF_RANGE` (`welds`/`pieces`) for a count that is not a whole number from 1
+ *    weld (2 pieces) to 90 welds, or a single weld asked to turn 180°;
+ *  - `BAD_OPTION` (`radiusMm`/`radiusNps`) when both or neither are given, or
+ *    `radiusNps` without `pipe.npsIn`;
+ *  - `OUT_OF_RANGE` (`radiusMm`/`radiusNps`) for a radius below half the OD;
+ *  - `NEGATIVE` (`tangentMm`); `NOT_A_NUMBER`/`NOT_FINITE` for NaN or Infinity
+ *    anywhere; `BAD_OPTION` (`fitSurface`); the pipe errors of `resolvePipeSection`.
+ * @example resolveMiterSpec({ pipe: { odMm: 323.9, wallMm: 9.53 }, bendDeg: 90, pieces: 4, radiusMm: 457.2 }).cutAngleDeg // 15
+ */
+export function resolveMiterSpec(spec: MiterSpec): ResolvedMiterSpec {
+  if (spec === null || typeof spec !== 'object') {
+    throw new GirthError('EMPTY_INPUT', 'miter', 'miter: give the pipe, the bend and the number of welds or pieces', spec);
+  }
+  const pipe = resolvePipeSection(spec.pipe);
+  const bendDeg = requireInRange(spec.bendDeg, 'bendDeg', 0, 180, { minOpen: true, unit: 'degrees' });
+  const { welds, field: countField } = resolveWelds(spec);
+  const cutAngleDeg = bendDeg / (2 * welds);
+  if (!(cutAngleDeg < 90)) {
+    throw new GirthError(
+      'OUT_OF_RANGE',
+      countField,
+      `${countField}: a ${bendDeg}° bend needs at least ${Math.floor(bendDeg / 180) + 1} welds (${Math.floor(bendDeg / 180) + 2} pieces); with ${welds} each cut would lean ${cutAngleDeg}°, and a cut must lean less than 90°`,
+      countField === 'welds' ? spec.welds : spec.pieces,
+    );
+  }
+  const radiusMm = resolveRadiusMm(spec, pipe);
+  const tangentMm = spec.tangentMm === undefined ? 0 : requireNonNegative(spec.tangentMm, 'tangentMm');
+  const fitSurface: CutFitSurface = spec.fitSurface ?? 'od';
+  return {
+    kind: 'miter-spec',
+    pipe,
+    bendDeg,
+    welds,
+    pieceCount: welds + 1,
+    cutAngleDeg,
+    radiusMm,
+    tangentMm,
+    fitSurface,
+    fitRadiusMm: fitRadiusMm(pipe, fitSurface),
+  };
+}
+
+function resolveWelds(spec: MiterSpec): { welds: number; field: 'welds' | 'pieces' } {
+  const hasWelds = spec.welds !== undefined;
+  const hasPieces = spec.pieces !== undefined;
+  if (hasWelds && hasPieces) {
+    throw new GirthError('BAD_OPTION', 'pieces', 'pieces: give the number of welds or of pieces, not both (pieces = welds + 1)', spec.pieces);
+  }
+  if (!hasWelds && !hasPieces) {
+    throw new GirthError('BAD_OPTION', 'welds', 'welds: give the number of welds or of pieces (pieces = welds + 1)');
+  }
+  if (hasWelds) return { welds: requireInteger(spec.welds, 'welds', 1, MAX_MITER_WELDS), field: 'welds' };
+  return { welds: requireInteger(spec.pieces, 'pieces', 2, MAX_MITER_WELDS + 1) - 1, field: 'pieces' };
+}
+
+function resolveRadiusMm(spec: MiterSpec, pipe: ResolvedPipeSection): number {
+  const halfOd = pipe.odMm / 2;
+  const hasMm = spec.radiusMm !== undefined;
+  const hasNps = spec.radiusNps !== undefined;
+  if (hasMm && hasNps) {
+    throw new GirthError('BAD_OPTION', 'radiusNps', 'radiusNps: give the centreline radius in mm or as a multiple of the nominal size, not both', spec.radiusNps);
+  }
+  if (!hasMm && !hasNps) {
+    throw new GirthError('BAD_OPTION', 'radiusMm', 'radiusMm: give the centreline radius (radiusMm, or radiusNps with the nominal size)');
+  }
+  if (hasMm) {
+    const r = requireFinite(spec.radiusMm, 'radiusMm');
+    if (r < halfOd) {
+      throw new GirthError(
+        'OUT_OF_RANGE',
+        'radiusMm',
+        `radiusMm: a centreline radius of ${r} mm is less than half the OD (${halfOd} mm); the throat would fold over itself`,
+        spec.radiusMm,
+      );
+    }
+    return r;
+  }
+  const multiple = requirePositive(spec.radiusNps, 'radiusNps');
+  if (pipe.npsIn === undefined) {
+    throw new GirthError('BAD_OPTION', 'radiusNps', 'radiusNps: a radius in nominal sizes needs the pipe\'s nominal size (pipe.npsIn); give radiusMm instead', spec.radiusNps);
+  }
+  const r = multiple * pipe.npsIn * MM_PER_IN;
+  if (r < halfOd) {
+    const least = halfOd / (pipe.npsIn * MM_PER_IN);
+    throw new GirthError(
+      'OUT_OF_RANGE',
+      'radiusNps',
+      `radiusNps: ${multiple} × NPS ${pipe.npsIn} is a radius of ${r} mm, less than half the OD (${halfOd} mm); use at least ${least.toFixed(3)}`,
+      spec.radiusNps,
+    );
+  }
+  return r;
+}
