@@ -1,0 +1,105 @@
+/**
+ * Checking a template before it is drawn: every number finite and within
+ * reach, arcs with a radius and a sweep, wraps with their stretch-out.
+ */
+import { GirthError, requireFinite, requireInRange, requirePositive } from '@girth/pipes';
+import type { PathPart, Point2, Template } from '@girth/unroll';
+
+/** Largest coordinate magnitude accepted, mm (1 km: beyond any sheet, and far from float trouble). */
+export const MAX_COORD_MM = 1_000_000;
+/** Largest label cap height accepted, mm. */
+export const MAX_LABEL_HEIGHT_MM = 200;
+
+function checkPoint(p: Point2, field: string): void {
+  if (!Array.isArray(p) || p.length !== 2) {
+    throw new GirthError('BAD_JOB', field, `${field}: expected a point [x, y]`, p);
+  }
+  requireInRange(p[0], `${field}[0]`, -MAX_COORD_MM, MAX_COORD_MM, { unit: 'mm' });
+  requireInRange(p[1], `${field}[1]`, -MAX_COORD_MM, MAX_COORD_MM, { unit: 'mm' });
+}
+
+/** Sweep of an arc from `startDeg` counter-clockwise to `endDeg`, in (0, 360]. */
+export function arcSweepDeg(startDeg: number, endDeg: number): number {
+  const raw = endDeg - startDeg;
+  if (raw >= 360) return 360;
+  return ((raw % 360) + 360) % 360;
+}
+
+function checkPart(part: PathPart, field: string): void {
+  switch (part.kind) {
+    case 'polyline': {
+      if (!Array.isArray(part.points) || part.points.length < 2) {
+        throw new GirthError('EMPTY_INPUT', `${field}.points`, `${field}.points: a polyline needs at least 2 points`, part.points);
+      }
+      part.points.forEach((p, i) => checkPoint(p, `${field}.points[${i}]`));
+      return;
+    }
+    case 'segment':
+      checkPoint(part.from, `${field}.from`);
+      checkPoint(part.to, `${field}.to`);
+      return;
+    case 'arc': {
+      checkPoint(part.center, `${field}.center`);
+      requirePositive(part.radiusMm, `${field}.radiusMm`);
+      requireInRange(part.radiusMm, `${field}.radiusMm`, 0, MAX_COORD_MM, { unit: 'mm', minOpen: true });
+      const start = requireFinite(part.startDeg, `${field}.startDeg`);
+      const end = requireFinite(part.endDeg, `${field}.endDeg`);
+      if (arcSweepDeg(start, end) === 0) {
+        throw new GirthError(
+          'OUT_OF_RANGE',
+          `${field}.endDeg`,
+          `${field}: an arc must sweep more than 0°, got ${start}° to ${end}° (use 0° to 360° for a full circle)`,
+          end,
+        );
+      }
+      return;
+    }
+    default: {
+      const kind = (part as { kind?: unknown }).kind;
+      throw new GirthError('BAD_JOB', `${field}.kind`, `${field}.kind: expected polyline, arc or segment, got ${String(kind)}`, kind);
+    }
+  }
+}
+
+/**
+ * Checks that a template can be drawn.
+ *
+ * @param template - the template to draw (mm, y-up).
+ * @throws GirthError with the field path inside the template (e.g. `template.cut[0].points[14][1]`):
+ *   `NOT_A_NUMBER` / `NOT_FINITE` for a coordinate that is NaN or infinite; `OUT_OF_RANGE` for a
+ *   coordinate beyond ±1 000 000 mm, an arc sweeping 0° or a label taller than 200 mm; `NEGATIVE`
+ *   for a radius or label height of 0 or less; `EMPTY_INPUT` for a template with nothing to cut,
+ *   or a wrap without `stretchOutMm` / `wrapOdMm`; `BAD_JOB` for a malformed point or part.
+ * @example
+ * ```ts
+ * checkTemplate(template); // returns nothing, or throws
+ * ```
+ */
+export function checkTemplate(template: Template): void {
+  const t = 'template';
+  if (!Array.isArray(template.cut) || template.cut.length === 0) {
+    throw new GirthError('EMPTY_INPUT', `${t}.cut`, `${t}.cut: a template needs at least one cut line`);
+  }
+  template.cut.forEach((p, i) => checkPart(p, `${t}.cut[${i}]`));
+  template.marks.forEach((p, i) => checkPart(p, `${t}.marks[${i}]`));
+  if (template.squareLine) checkPart(template.squareLine, `${t}.squareLine`);
+  template.stationLines.forEach((s, i) => {
+    checkPoint(s.from, `${t}.stationLines[${i}].from`);
+    checkPoint(s.to, `${t}.stationLines[${i}].to`);
+    requireFinite(s.n, `${t}.stationLines[${i}].n`);
+  });
+  template.labels.forEach((l, i) => {
+    checkPoint(l.at, `${t}.labels[${i}].at`);
+    requirePositive(l.heightMm, `${t}.labels[${i}].heightMm`);
+    requireInRange(l.heightMm, `${t}.labels[${i}].heightMm`, 0, MAX_LABEL_HEIGHT_MM, { unit: 'mm', minOpen: true });
+  });
+  if (template.kind === 'wrap') {
+    for (const key of ['stretchOutMm', 'wrapOdMm'] as const) {
+      if (template[key] === undefined) {
+        throw new GirthError('EMPTY_INPUT', `${t}.${key}`, `${t}.${key}: a wrap template needs its ${key}`);
+      }
+      requirePositive(template[key], `${t}.${key}`);
+      requireInRange(template[key], `${t}.${key}`, 0, MAX_COORD_MM, { unit: 'mm', minOpen: true });
+    }
+  }
+}
