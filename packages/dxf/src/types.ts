@@ -1,0 +1,45 @@
+/**
+ * Options and vocabulary of the DXF exporter.
+ */
+
+/**
+ * Which DXF to write. `AC1021` (AutoCAD 2007 format, LWPOLYLINE with bulges,
+ * handles) suits current CAD and nesting software; `R12` (AC1009: POLYLINE /
+ * VERTEX / SEQEND, no handles) suits older cutting-table controllers.
+ */
+export type DxfVersion = 'AC1021' | 'R12';
+
+/** Unit of the coordinates written (and of `$INSUNITS`): millimetres or inches. */
+export type DxfUnits = 'mm' | 'in';
+
+/** The three layers Girth writes, by role. */
+export type DxfLayerRole = 'cut' | 'mark' | 'text';
+
+/** A layer as written: name and AutoCAD Colour Index (1-255, never empty). */
+export interface DxfLayer {
+  readonly kind: 'dxf-layer';
+  readonly role: DxfLayerRole;
+  readonly name: string;
+  /** AutoCAD Colour Index, 1-255. */
+  readonly colorAci: number;
+  /** What a cutting table should do with it. */
+  readonly purpose: string;
+}
+
+/** Options of {@link templateToDxf}; every field is optional. */
+export interface DxfOptions {
+  /** Output unit; default `'mm'`. With `'in'` every coordinate is divided by 25.4 exactly. */
+  readonly units?: DxfUnits;
+  /** DXF version; default `'AC1021'`. */
+  readonly version?: DxfVersion;
+  /** Job name or number for the title text (any text; made ASCII-safe). */
+  readonly job?: string;
+  /** Piece or spool mark for the title text (any text; made ASCII-safe). */
+  readonly piece?: string;
+  /** Cap height of the title line in mm, (0, 100]; default 5. Notes and the caution are 0.7 of it. */
+  readonly textHeightMm?: number;
+  /** Write each station's number beside its station line; default true. */
+  readonly stationNumbers?: boolean;
+  /** Path ends closer than this (mm) are joined, (0, 1]; default {@link JOIN_EPS_MM}. */
+  readonly joinEpsMm?: number;
+}
