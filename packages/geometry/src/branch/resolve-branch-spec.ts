@@ -1,0 +1,96 @@
+/**
+ * Checks a branch joint as given and fills in its defaults.
+ */
+import { GirthError, requireFinite, requireNonNegative, requirePositive } from '@girth/pipes';
+import { formatLengthMm } from '../internal/format-length.js';
+import type { BranchContact, BranchFit, BranchPipeSection, BranchSpec, PipeFace, ResolvedBranchSpec } from './types.js';
+
+/** Default angle between branch and header axes: a tee, degrees. */
+export const DEFAULT_BRANCH_ANGLE_DEG = 90;
+
+/** The surfaces that meet for each fit (REFERENCES.md, common practice: set-on = branch ID on header OD; set-in = branch OD on header ID). */
+export const FIT_CONTACT: Readonly<Record<BranchFit, BranchContact>> = {
+  'set-on': { branch: 'inside', header: 'outside' },
+  'set-in': { branch: 'outside', header: 'inside' },
+};
+
+/**
+ * The spec checked field by field, with defaults: angle 90°, offset 0,
+ * fit `set-on`, contact from the fit, gap 0. Does not check that the pipes
+ * fit each other (see `solveBranch`).
+ *
+ * @throws GirthError `EMPTY_INPUT` (no spec, header or branch);
+ *   `NOT_A_NUMBER` / `NOT_FINITE` naming the field; `NEGATIVE` for an OD or
+ *   wall ≤ 0 or a negative `gapMm`; `WALL_TOO_THICK` when a wall is half the
+ *   OD or more; `BAD_ANGLE` for `angleDeg` outside (0, 90]; `BAD_OPTION` for
+ *   an unknown `fit` or `contact` or a label that is not text.
+ * @example resolveBranchSpec({ header: { odMm: 323.85, wallMm: 9.525 }, branch: { odMm: 168.275, wallMm: 7.112 } }).fit // 'set-on'
+ */
+export function resolveBranchSpec(spec: BranchSpec): ResolvedBranchSpec {
+  if (spec === null || typeof spec !== 'object') {
+    throw new GirthError('EMPTY_INPUT', 'spec', 'spec: give the header, the branch and the joint', spec);
+  }
+  const header = resolvePipe(spec.header, 'header');
+  const branch = resolvePipe(spec.branch, 'branch');
+  const angleDeg = resolveAngle(spec.angleDeg);
+  const offsetMm = spec.offsetMm === undefined ? 0 : requireFinite(spec.offsetMm, 'offsetMm');
+  const fit = resolveFit(spec.fit);
+  const contact = spec.contact === undefined ? FIT_CONTACT[fit] : resolveContact(spec.contact);
+  const gapMm = spec.gapMm === undefined ? 0 : requireNonNegative(spec.gapMm, 'gapMm');
+  return { kind: 'branch-spec', header, branch, angleDeg, offsetMm, fit, contact, gapMm };
+}
+
+function resolvePipe(pipe: unknown, role: 'header' | 'branch'): BranchPipeSection {
+  if (pipe === null || typeof pipe !== 'object') {
+    throw new GirthError('EMPTY_INPUT', role, `${role}: give the ${role} pipe's OD and wall`, pipe);
+  }
+  const p = pipe as { odMm?: unknown; wallMm?: unknown; label?: unknown };
+  const odMm = requirePositive(p.odMm, `${role}.odMm`);
+  const wallMm = requirePositive(p.wallMm, `${role}.wallMm`);
+  if (2 * wallMm >= odMm) {
+    throw new GirthError(
+      'WALL_TOO_THICK',
+      `${role}.wallMm`,
+      `${role}.wallMm: a wall of ${formatLengthMm(wallMm)} leaves no bore in OD ${formatLengthMm(odMm)}; the wall must be less than ${formatLengthMm(odMm / 2)}`,
+      p.wallMm,
+    );
+  }
+  if (p.label !== undefined && typeof p.label !== 'string') {
+    throw new GirthError('BAD_OPTION', `${role}.label`, `${role}.label: expected text`, p.label);
+  }
+  const label = typeof p.label === 'string' && p.label.trim() !== '' ? p.label : `${odMm} mm OD x ${wallMm} mm wall`;
+  return { kind: 'branch-pipe', role, odMm, wallMm, idMm: odMm - 2 * wallMm, label };
+}
+
+function resolveAngle(value: unknown): number {
+  if (value === undefined) return DEFAULT_BRANCH_ANGLE_DEG;
+  const v = requireFinite(value, 'angleDeg');
+  if (!(v > 0 && v <= 90)) {
+    throw new GirthError(
+      'BAD_ANGLE',
+      'angleDeg',
+      `angleDeg: the angle between branch and header axes must be more than 0° and at most 90° (a tee), got ${v}°`,
+      value,
+    );
+  }
+  return v;
+}
+
+function resolveFit(value: unknown): BranchFit {
+  if (value === undefined) return 'set-on';
+  if (value === 'set-on' || value === 'set-in') return value;
+  throw new GirthError('BAD_OPTION', 'fit', `fit: must be 'set-on' or 'set-in', got ${JSON.stringify(value)}`, value);
+}
+
+function resolveContact(value: unknown): BranchContact {
+  if (value === null || typeof value !== 'object') {
+    throw new GirthError('BAD_OPTION', 'contact', `contact: expected { branch, header }, each 'inside' or 'outside'`, value);
+  }
+  const c = value as { branch?: unknown; header?: unknown };
+  return { branch: resolveFace(c.branch, 'contact.branch'), header: resolveFace(c.header, 'contact.header') };
+}
+
+function resolveFace(value: unknown, field: string): PipeFace {
+  if (value === 'inside' || value === 'outside') return value;
+  throw new GirthError('BAD_OPTION', field, `${field}: must be 'inside' or 'outside', got ${JSON.stringify(value)}`, value);
+}
