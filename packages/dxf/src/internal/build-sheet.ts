@@ -42,21 +42,29 @@ function markEntities(template: Template, o: ResolvedDxfOptions): SheetEntity[] 
     out.push({ kind: 'line', layer: 'mark', from, to });
   }
   const numberHeight = o.textHeightMm * STATION_NUMBER_SCALE;
-  requireList(template.stationLines, 'template.stationLines').forEach((_, i) => {
+  const lines = requireList(template.stationLines, 'template.stationLines').map((_, i) => {
     const line = template.stationLines[i]!;
     const field = `template.stationLines[${i}]`;
     const from = checkPointMm(line.from, `${field}.from`);
     const to = checkPointMm(line.to, `${field}.to`);
-    const length = Math.hypot(to[0] - from[0], to[1] - from[1]);
-    if (length > o.joinEpsMm) out.push({ kind: 'line', layer: 'mark', from, to });
+    return { n: line.n, from, to, length: Math.hypot(to[0] - from[0], to[1] - from[1]) };
+  });
+  // A zero-length station line (e.g. at the heel of a plane cut) takes its
+  // number's direction from the others, so all numbers sit on the same side.
+  const drawn = lines.filter((l) => l.length > o.joinEpsMm);
+  const sx = drawn.reduce((acc, l) => acc + (l.to[0] - l.from[0]) / l.length, 0);
+  const sy = drawn.reduce((acc, l) => acc + (l.to[1] - l.from[1]) / l.length, 0);
+  const sLen = Math.hypot(sx, sy);
+  const usual: readonly [number, number] = sLen > 1e-9 ? [sx / sLen, sy / sLen] : [0, 1];
+  for (const l of lines) {
+    if (l.length > o.joinEpsMm) out.push({ kind: 'line', layer: 'mark', from: l.from, to: l.to });
     if (o.stationNumbers) {
       // The number sits just past the line's `to` end, along the line.
-      const ux = length > o.joinEpsMm ? (to[0] - from[0]) / length : 0;
-      const uy = length > o.joinEpsMm ? (to[1] - from[1]) / length : -1;
+      const [ux, uy] = l.length > o.joinEpsMm ? [(l.to[0] - l.from[0]) / l.length, (l.to[1] - l.from[1]) / l.length] : usual;
       const gap = numberHeight * 1.2;
-      out.push(...text(String(line.n), [to[0] + ux * gap, to[1] + uy * gap], numberHeight, 'center'));
+      out.push(...text(String(l.n), [l.to[0] + ux * gap, l.to[1] + uy * gap], numberHeight, 'center'));
     }
-  });
+  }
   out.push(...joinParts(requireList(template.marks, 'template.marks') as Template['marks'], 'mark', 'template.marks', o.joinEpsMm));
   return out;
 }
@@ -71,11 +79,13 @@ function labelEntities(template: Template): SheetEntity[] {
   });
 }
 
-/** Title, notes, job line, unit line and caution, left-aligned below the geometry. */
+/** Title, notes, job line, unit line and caution, left-aligned below the geometry and its labels. */
 function titleEntities(template: Template, o: ResolvedDxfOptions, drawn: readonly SheetEntity[]): SheetEntity[] {
   const box = sheetExtents(drawn);
   const left = box === null ? 0 : box[0];
   let y = box === null ? 0 : box[1];
+  // Centred texts reach half their height below their point; keep the title clear of them.
+  for (const e of drawn) if (e.kind === 'text') y = Math.min(y, e.at[1] - e.height / 2);
   const h = o.textHeightMm;
   const small = h * SMALL_TEXT_SCALE;
   const lines: Array<[string, number]> = [[String(template.title ?? ''), h]];
@@ -108,8 +118,7 @@ export function buildSheet(template: Template, o: ResolvedDxfOptions): Sheet {
   const cut = joinParts(template.cut, 'cut', 'template.cut', o.joinEpsMm);
   const marks = markEntities(template, o);
   const labels = labelEntities(template);
-  const geometry = [...cut, ...marks];
-  const title = titleEntities(template, o, geometry);
+  const title = titleEntities(template, o, [...cut, ...marks, ...labels]);
   const k = o.units === 'in' ? 1 / MM_PER_INCH : 1;
   return { kind: 'sheet', units: o.units, entities: [...cut, ...marks, ...labels, ...title].map((e) => scaleEntity(e, k)) };
 }
