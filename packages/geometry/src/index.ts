@@ -5,3 +5,5 @@ export * from './generators.js';
 export * from './surfaces/line-intersection.js';
 export * from './cone/index.js';
 export * from './branch/index.js';
+export * from './plane-cut/index.js';
+export * from './miter/index.js';
