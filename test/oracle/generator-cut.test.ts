@@ -65,6 +65,14 @@ describe('cutGeneratorAgainstCylinder against published statements', () => {
     expect(down.kind === 'hit' && down.pointMm[2]).toBe(-10);
   });
 
+  it('takes a graze as a touch at the closest point, and a line 1e-9 R outside as a miss (first principles)', () => {
+    const graze = cutGeneratorAgainstCylinder({ kind: 'line', originMm: [0, 10, 0], direction: [0, 0, 1] }, xCylinder(10));
+    expect(graze.kind).toBe('hit');
+    // The tangent point is s = 0; a flat minimum is located to ~sqrt(eps) R (1.5e-7 here).
+    if (graze.kind === 'hit') expect(Math.abs(graze.sMm)).toBeLessThanOrEqual(1e-6);
+    expect(cutGeneratorAgainstCylinder({ kind: 'line', originMm: [0, 10 + 1e-8, 0], direction: [0, 0, 1] }, xCylinder(10)).kind).toBe('miss');
+  });
+
   it('reports a miss for a line outside the cylinder or parallel to its axis', () => {
     expect(cutGeneratorAgainstCylinder({ kind: 'line', originMm: [0, 10.001, 0], direction: [0, 0, 1] }, xCylinder(10))).toEqual({ kind: 'miss', reason: 'outside' });
     expect(cutGeneratorAgainstCylinder({ kind: 'line', originMm: [0, 1, 0], direction: [1, 0, 0] }, xCylinder(10))).toEqual({ kind: 'miss', reason: 'parallel' });

@@ -35,6 +35,14 @@ export type GeneratorCut =
   | { readonly kind: 'hit'; readonly sMm: number; readonly pointMm: Vec3 }
   | { readonly kind: 'miss'; readonly reason: 'parallel' | 'outside' };
 
+/**
+ * A line whose least distance from the surface is within this fraction of the
+ * radius (about 45 ulp) grazes it: the oracle reports the touching point rather
+ * than a miss decided by rounding. Far below any geometry a test asks about on
+ * purpose (the sweeps keep 1e-4 of the radius clear of tangency).
+ */
+const GRAZE_REL = 1e-14;
+
 /** Lines whose direction is within this sine of the host's axis (or plane) are treated as parallel: the oracle has no cut for them. */
 const PARALLEL_SINE = 1e-12;
 
@@ -75,7 +83,7 @@ export function signedDistanceToCylinder(pointMm: Vec3, cylinder: OracleCylinder
  *
  * @param line the generator, unit direction.
  * @param cylinder the host, unit axis direction, radius > 0 (mm).
- * @returns `hit` with `sMm` and the point, or `miss` (`parallel`, or `outside` when the line never enters).
+ * @returns `hit` with `sMm` and the point (a graze within 1e-14 of the radius counts, at the closest point), or `miss` (`parallel`, or `outside` when the line never enters).
  * @throws Error when the data are not finite.
  * @example
  * cutGeneratorAgainstCylinder(
@@ -109,7 +117,10 @@ export function cutGeneratorAgainstCylinder(line: OracleLine, cylinder: OracleCy
     h *= 2;
   }
   const dip = findDipOfConvex(f, -h, h);
-  if (dip.kind === 'none') return { kind: 'miss', reason: 'outside' };
+  if (dip.kind === 'none') {
+    if (dip.fMin > GRAZE_REL * radius) return { kind: 'miss', reason: 'outside' };
+    return { kind: 'hit', sMm: dip.xMin, pointMm: pointOnLine(line, dip.xMin) };
+  }
   const sMm = bisectSignChange(f, dip.x, h);
   return { kind: 'hit', sMm, pointMm: pointOnLine(line, sMm) };
 }
