@@ -1,3 +1,4 @@
 export * from './types.js';
 export * from './wrap/sample-cut.js';
 export * from './wrap/develop-wrap.js';
+export * from './cone/index.js';

@@ -1,0 +1,76 @@
+/**
+ * Words on reducer templates: titles, notes, the caution and warnings.
+ */
+import type { GirthWarning } from '@girth/pipes';
+import type { ResolvedCone } from './resolve-cone.js';
+
+/**
+ * The caution every reducer template carries in its notes.
+ * @example CONE_CAUTION.startsWith('CAUTION') // true
+ */
+export const CONE_CAUTION =
+  'CAUTION: verify against the actual pipe and plate before cutting; follow qualified procedures, ASME B31.1/B31.3, ' +
+  'local rules and licensed practice. Girth lays out geometry only and does not size reinforcement.';
+
+/**
+ * Elements leaning more than this from the axis get a warning: a cone-to-pipe
+ * junction steeper than a 30° half-apex angle falls outside the simple rules for
+ * conical sections (ASME Section VIII Div. 1 UG-32(g) and Appendix 1-5, recalled)
+ * and needs the engineer's own analysis; Girth does not check it.
+ */
+export const STEEP_CONE_WARN_DEG = 30;
+
+/**
+ * Warnings for a resolved reducer.
+ * @example coneWarnings(cone).map((w) => w.code) // [] or ['STEEP_CONE']
+ */
+export function coneWarnings(cone: ResolvedCone): readonly GirthWarning[] {
+  const warnings: GirthWarning[] = [];
+  if (cone.maxInclinationDeg > STEEP_CONE_WARN_DEG) {
+    warnings.push({
+      code: 'STEEP_CONE',
+      field: cone.form === 'concentric' ? 'apexAngleDeg' : 'lengthMm',
+      message:
+        `An element leans ${deg(cone.maxInclinationDeg)} from the axis, more than ${STEEP_CONE_WARN_DEG}°: ` +
+        'the junctions with the pipes need the design engineer to check them under the applicable code.',
+    });
+  }
+  return warnings;
+}
+
+/** Degrees for text, two decimals. */
+export function deg(value: number): string {
+  return `${value.toFixed(2)}°`;
+}
+
+/**
+ * Title of one template.
+ * @example coneTitle(cone, 0) // 'Concentric cone: OD 219.10 mm to OD 168.30 mm'
+ */
+export function coneTitle(cone: ResolvedCone, pieceIndex: number): string {
+  const form = cone.form === 'concentric' ? 'Concentric cone' : 'Eccentric cone';
+  const piece = cone.segments > 1 ? ` (piece ${pieceIndex + 1} of ${cone.segments})` : '';
+  return `${form}: ${cone.largeLabel} to ${cone.smallLabel}${piece}`;
+}
+
+/**
+ * Note lines both forms share: size, length and angle, plate and mean surface.
+ * @example commonConeNotes(cone, 213.1, 162.3)[0]
+ */
+export function commonConeNotes(cone: ResolvedCone, meanLargeGirthMm: number, meanSmallGirthMm: number): readonly string[] {
+  const f = cone.formatLength;
+  const angle =
+    cone.form === 'concentric'
+      ? `apex angle ${deg(cone.apexAngleDeg)} (half-angle ${deg(cone.apexAngleDeg / 2)})`
+      : `apex angle ${deg(cone.apexAngleDeg)} between the flat side and the opposite element`;
+  const surface = { outside: 'outside', inside: 'inside', mean: 'mean' }[cone.diametersAt];
+  const plate =
+    cone.thicknessMm > 0
+      ? `Plate ${f(cone.thicknessMm)}: developed on the mean surface, half the plate thickness from the ${surface} surface measured square to the cone.`
+      : 'Thin sheet (thickness 0): developed on the given surface.';
+  return [
+    `Ends: ${f(cone.largeDiameterMm)} and ${f(cone.smallDiameterMm)} on the ${surface} surface; ${f(cone.lengthMm)} between the end planes; ${angle}.`,
+    plate,
+    `Edge girths on the mean surface: large end ${f(meanLargeGirthMm)}, small end ${f(meanSmallGirthMm)}.`,
+  ];
+}

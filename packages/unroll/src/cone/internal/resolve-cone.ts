@@ -1,0 +1,161 @@
+/**
+ * Checks a reducer spec and its options and turns them into the 3D cone.
+ */
+import {
+  coneApexAngleDeg,
+  coneLengthFromApexAngle,
+  elementInclinationRad,
+  makeConeFrustum,
+  makeConeSheet,
+  type ConeForm,
+  type ConeFrustum,
+  type ConeSheet,
+  type DiameterSurface,
+} from '@girth/geometry';
+import { GirthError, requireInRange, requireInteger, requirePositive } from '@girth/pipes';
+import type { ConeLayoutOptions, ConeSpec, EccentricConeOptions, EccentricSeam } from '../types.js';
+
+/** Stations around a cone: fewest and most. */
+export const CONE_MIN_STATIONS = 4;
+export const CONE_MAX_STATIONS = 360;
+/** Stations when none are asked for: 16 of 22.5°, as the trade divides a girth (common practice). */
+export const CONE_DEFAULT_STATIONS = 16;
+
+/** A reducer ready to lay out. Lengths in mm. */
+export interface ResolvedCone {
+  readonly form: ConeForm;
+  readonly largeDiameterMm: number;
+  readonly smallDiameterMm: number;
+  readonly lengthMm: number;
+  readonly apexAngleDeg: number;
+  readonly maxInclinationDeg: number;
+  readonly thicknessMm: number;
+  readonly diametersAt: DiameterSurface;
+  /** The cone on the surface the diameters were given on. */
+  readonly given: ConeFrustum;
+  /** Its mean surface, the one developed. */
+  readonly sheet: ConeSheet;
+  readonly stations: number;
+  readonly segments: number;
+  readonly largeLabel: string;
+  readonly smallLabel: string;
+  readonly formatLength: (mm: number) => string;
+}
+
+/** Default length format of titles and notes: two decimals in mm. */
+export const formatMm = (mm: number): string => `${mm.toFixed(2)} mm`;
+
+const SURFACE_PREFIX: Readonly<Record<DiameterSurface, string>> = { outside: 'OD', inside: 'ID', mean: 'mean dia.' };
+
+/**
+ * The checked reducer of `spec` and `options`, as `form`.
+ *
+ * @throws GirthError naming the field and the limit: `BAD_JOB` (spec not an
+ *   object), `NOT_A_NUMBER`/`NOT_FINITE`/`NEGATIVE` for bad numbers,
+ *   `OUT_OF_RANGE` for a small diameter not below the large one (field
+ *   `smallDiameterMm`), an apex angle outside its range, stations outside
+ *   4..360 or segments outside 1..stations; `BAD_OPTION` for both or neither of
+ *   length and angle, segments that do not divide the stations, an unknown
+ *   `diametersAt` or label/formatter of the wrong type; `WALL_TOO_THICK` for a
+ *   plate that leaves no inside surface.
+ * @example resolveCone({ largeDiameterMm: 219.1, smallDiameterMm: 168.3, lengthMm: 152, thicknessMm: 6 }, {}, 'concentric').lengthMm // 152
+ */
+export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: ConeForm): ResolvedCone {
+  if (typeof spec !== 'object' || spec === null) {
+    throw new GirthError('BAD_JOB', 'spec', 'spec: expected the reducer as an object with its diameters, length or angle, and plate thickness', spec);
+  }
+  const largeDiameterMm = requirePositive(spec.largeDiameterMm, 'largeDiameterMm');
+  const smallDiameterMm = requirePositive(spec.smallDiameterMm, 'smallDiameterMm');
+  if (!(smallDiameterMm < largeDiameterMm)) {
+    throw new GirthError(
+      'OUT_OF_RANGE',
+      'smallDiameterMm',
+      `smallDiameterMm: the small end (${smallDiameterMm} mm) must be smaller than the large end (${largeDiameterMm} mm)`,
+      spec.smallDiameterMm,
+    );
+  }
+  const diffMm = largeDiameterMm - smallDiameterMm;
+  const hasLength = spec.lengthMm !== undefined;
+  const hasAngle = spec.apexAngleDeg !== undefined;
+  if (hasLength && hasAngle) {
+    throw new GirthError('BAD_OPTION', 'apexAngleDeg', 'apexAngleDeg: give the length or the apex angle, not both', spec.apexAngleDeg);
+  }
+  if (!hasLength && !hasAngle) {
+    throw new GirthError('BAD_OPTION', 'lengthMm', 'lengthMm: give the length between the ends along the axis, or the apex angle', undefined);
+  }
+  const lengthMm = hasLength
+    ? requirePositive(spec.lengthMm, 'lengthMm')
+    : coneLengthFromApexAngle(diffMm, spec.apexAngleDeg as number, form);
+  const apexAngleDeg = coneApexAngleDeg(diffMm, lengthMm, form);
+
+  const diametersAt = spec.diametersAt ?? 'outside';
+  const R = largeDiameterMm / 2;
+  const r = smallDiameterMm / 2;
+  const given = makeConeFrustum({ largeRadiusMm: R, smallRadiusMm: r, lengthMm, offsetMm: form === 'eccentric' ? R - r : 0 });
+  const sheet = makeConeSheet(given, spec.thicknessMm, diametersAt);
+  const maxInclinationDeg = (elementInclinationRad(given, Math.PI) * 180) / Math.PI;
+
+  const stations = requireInteger(options.stations ?? CONE_DEFAULT_STATIONS, 'stations', CONE_MIN_STATIONS, CONE_MAX_STATIONS);
+  const segments = requireInteger(options.segments ?? 1, 'segments', 1, stations);
+  if (stations % segments !== 0) {
+    throw new GirthError(
+      'BAD_OPTION',
+      'segments',
+      `segments: ${stations} stations do not divide into ${segments} equal pieces; choose a station count that is a multiple of ${segments}`,
+      options.segments,
+    );
+  }
+  const formatLength = options.formatLength ?? formatMm;
+  if (typeof formatLength !== 'function') {
+    throw new GirthError('BAD_OPTION', 'formatLength', 'formatLength: expected a function from mm to text', formatLength);
+  }
+  const label = (value: unknown, field: string, diameterMm: number): string => {
+    if (value === undefined) return `${SURFACE_PREFIX[diametersAt]} ${formatLength(diameterMm)}`;
+    if (typeof value !== 'string' || value.trim() === '') {
+      throw new GirthError('BAD_OPTION', field, `${field}: expected a pipe name as text`, value);
+    }
+    return value;
+  };
+  return {
+    form,
+    largeDiameterMm,
+    smallDiameterMm,
+    lengthMm,
+    apexAngleDeg,
+    maxInclinationDeg,
+    thicknessMm: sheet.thicknessMm,
+    diametersAt,
+    given,
+    sheet,
+    stations,
+    segments,
+    largeLabel: label(spec.largeLabel, 'largeLabel', largeDiameterMm),
+    smallLabel: label(spec.smallLabel, 'smallLabel', smallDiameterMm),
+    formatLength,
+  };
+}
+
+/** Default and range of the eccentric outline's chord tolerance, mm. */
+export const CONE_DEFAULT_CHORD_TOLERANCE_MM = 0.05;
+export const CONE_MIN_CHORD_TOLERANCE_MM = 0.001;
+export const CONE_MAX_CHORD_TOLERANCE_MM = 5;
+
+/**
+ * The eccentric-only options, checked.
+ * @throws GirthError `BAD_OPTION` for an unknown seam, `OUT_OF_RANGE` for a chord tolerance outside 0.001..5 mm.
+ * @example resolveEccentricOptions({}).seam // 'flat-side'
+ */
+export function resolveEccentricOptions(options: EccentricConeOptions): { readonly seam: EccentricSeam; readonly chordToleranceMm: number } {
+  const seam = options.seam ?? 'flat-side';
+  if (seam !== 'flat-side' && seam !== 'opposite') {
+    throw new GirthError('BAD_OPTION', 'seam', `seam: must be 'flat-side' or 'opposite', got ${String(seam)}`, seam);
+  }
+  const chordToleranceMm = requireInRange(
+    options.chordToleranceMm ?? CONE_DEFAULT_CHORD_TOLERANCE_MM,
+    'chordToleranceMm',
+    CONE_MIN_CHORD_TOLERANCE_MM,
+    CONE_MAX_CHORD_TOLERANCE_MM,
+    { unit: 'mm' },
+  );
+  return { seam, chordToleranceMm };
+}
