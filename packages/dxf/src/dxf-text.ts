@@ -2,6 +2,7 @@
  * Text made safe for a DXF TEXT entity: one line, printable ASCII, with the
  * DXF special-character codes for the diameter, degree and plus-minus signs.
  */
+import { flattenControls } from './internal/flatten-controls.js';
 import { MAX_TEXT_CHARS } from './tolerances.js';
 
 /** Characters written as DXF control codes (understood by CAD readers since R12). */
@@ -65,7 +66,7 @@ function emitChar(text: string, next: Token | undefined): string {
  * @example dxfSafeText('Ø168.3 @ 45°\n0\nLINE') // '%%c168.3 @ 45%%d 0 LINE'
  */
 export function dxfSafeText(text: string): string {
-  const flat = text.replace(/[\u0000-\u001F\u007F-\u009F\u2028\u2029]+/g, ' ').trim();
+  const flat = flattenControls(text).trim();
   const tokens = [...flat].flatMap(tokensOf);
   let out = '';
   for (let i = 0; i < tokens.length; i++) {

@@ -139,6 +139,18 @@ describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
     expect(dxf.entities.filter((e) => e.type === 'TEXT').every((e) => e.layer === 'TEXT')).toBe(true);
   });
 
+  it('breaks a long note into several text lines without losing a word', () => {
+    const words = Array.from({ length: 60 }, (_, i) => `word${i}`);
+    const t = { ...teeHole(NPS12_OD_MM, NPS6_STD_ID_MM, 16), notes: [words.join(' ')] };
+    const texts = parseDxf(templateToDxf(t, opts())).entities
+      .filter((e) => e.type === 'TEXT')
+      .map((e) => (e as unknown as { text: string }).text);
+    const noteLines = texts.filter((x) => x.startsWith('word'));
+    expect(noteLines.length).toBeGreaterThan(1);
+    expect(noteLines.join(' ').split(' ')).toEqual(words);
+    expect(noteLines.every((l) => l.length <= 110)).toBe(true);
+  });
+
   it('keeps a hostile label ONE text entity', () => {
     const base = teeHole(NPS12_OD_MM, NPS6_STD_ID_MM, 72);
     const hostile: Template = {

@@ -7,10 +7,12 @@ import type { Template } from '@girth/unroll';
 import { DXF_CAUTION } from '../caution.js';
 import { dxfSafeText } from '../dxf-text.js';
 import { checkLengthMm, checkPointMm } from './checks.js';
+import { flattenControls } from './flatten-controls.js';
 import { sheetExtents } from './extents.js';
 import { joinParts } from './join-parts.js';
 import type { ResolvedDxfOptions } from './options.js';
 import { scaleEntity } from './scale.js';
+import { wrapWords } from './wrap-words.js';
 import type { Sheet, SheetEntity } from './sheet.js';
 
 /** Millimetres in one inch, exactly (international inch, 1959). */
@@ -20,6 +22,8 @@ const MM_PER_INCH = 25.4;
 const STATION_NUMBER_SCALE = 0.6;
 /** Notes, job line and caution are this fraction of the title height. */
 const SMALL_TEXT_SCALE = 0.7;
+/** Title lines and notes longer than this many characters are broken into several lines. */
+const TITLE_LINE_CHARS = 110;
 /** Baseline-to-baseline spacing as a multiple of the text height. */
 const LINE_SPACING = 1.6;
 
@@ -88,12 +92,17 @@ function titleEntities(template: Template, o: ResolvedDxfOptions, drawn: readonl
   for (const e of drawn) if (e.kind === 'text') y = Math.min(y, e.at[1] - e.height / 2);
   const h = o.textHeightMm;
   const small = h * SMALL_TEXT_SCALE;
-  const lines: Array<[string, number]> = [[String(template.title ?? ''), h]];
+  const lines: Array<[string, number]> = [];
+  const add = (content: string, height: number): void => {
+    // Break the plain text at spaces first, then make each line safe, so no DXF code is split.
+    for (const part of wrapWords(flattenControls(content), TITLE_LINE_CHARS)) lines.push([part, height]);
+  };
+  add(String(template.title ?? ''), h);
   const jobLine = [o.job && `Job: ${o.job}`, o.piece && `Piece: ${o.piece}`].filter((s) => s).join('   ');
-  if (jobLine) lines.push([jobLine, small]);
-  requireList(template.notes ?? [], 'template.notes').forEach((note) => lines.push([String(note), small]));
-  lines.push([`Full size 1:1, units ${o.units === 'in' ? 'inch' : 'mm'}. Template ${String(template.id)}.`, small]);
-  lines.push([DXF_CAUTION, small]);
+  if (jobLine) add(jobLine, small);
+  requireList(template.notes ?? [], 'template.notes').forEach((note) => add(String(note), small));
+  add(`Full size 1:1, units ${o.units === 'in' ? 'inch' : 'mm'}. Template ${String(template.id)}.`, small);
+  lines.push([DXF_CAUTION, small]); // one line, as it is
   const out: SheetEntity[] = [];
   y -= h; // clear of the geometry
   for (const [content, height] of lines) {
