@@ -60,6 +60,19 @@ describe('mean surface of a rolled cone', () => {
     expectNear(maxEndShiftFactor(f), Math.SQRT2, 1e-12, 'factor');
   });
 
+  it('eccentric: the thickest plate is r cos(lean of the element opposite the flat side)', () => {
+    fc.assert(
+      fc.property(reducerArb, (c) => {
+        const R = c.largeDiameterMm / 2;
+        const r = c.smallDiameterMm / 2;
+        const f = makeConeFrustum({ largeRadiusMm: R, smallRadiusMm: r, lengthMm: c.lengthMm, offsetMm: R - r });
+        const lean = Math.atan((2 * (R - r)) / c.lengthMm);
+        expectNear(maxPlateThicknessMm(f, 'outside'), r * Math.cos(lean), 1e-9 * r, 'limit, outside');
+        expectNear(maxPlateThicknessMm(f, 'mean'), 2 * r * Math.cos(lean), 1e-9 * r, 'limit, mean');
+      }),
+    );
+  });
+
   it('plate too thick for the small end: WALL_TOO_THICK on thicknessMm, with the limit in the message', () => {
     const f = makeConeFrustum({ largeRadiusMm: 100, smallRadiusMm: 10, lengthMm: 200 });
     const limit = maxPlateThicknessMm(f, 'outside');

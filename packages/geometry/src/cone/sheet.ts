@@ -20,7 +20,9 @@ const SHIFT_SAMPLES = 3600;
 /**
  * The largest sideways move of an element's end, per mm of move square to the
  * surface, over all elements of `frustum` (≥ 1). For a concentric cone it is
- * 1 / cos(half-apex angle); for an eccentric one it is largest opposite the flat side.
+ * 1 / cos(half-apex angle); for an eccentric one it is largest opposite the flat side,
+ * 1 / cos of that element's lean. Found over 3600 elements evenly spaced from
+ * theta = 0, which include theta = π.
  * @example maxEndShiftFactor(makeConeFrustum({ largeRadiusMm: 2, smallRadiusMm: 1, lengthMm: 1 })) // √2
  */
 export function maxEndShiftFactor(frustum: ConeFrustum): number {

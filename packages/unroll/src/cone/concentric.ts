@@ -4,14 +4,11 @@
  */
 import { sheetElement } from '@girth/geometry';
 import type { Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
-import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_CAUTION } from './internal/cone-text.js';
+import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_CAUTION, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
 import { conePipes } from './internal/cone-pipes.js';
 import { arcExtremePoints, boundsOfPoints } from './internal/plate-frame.js';
 import { resolveCone } from './internal/resolve-cone.js';
 import type { ConcentricConeLayout, ConcentricConePiece, ConeLayoutOptions, ConePattern, ConeSpec } from './types.js';
-
-/** Cap height of the labels a cone pattern places itself (SEAM), mm. */
-export const CONE_LABEL_HEIGHT_MM = 5;
 
 const RAD = Math.PI / 180;
 

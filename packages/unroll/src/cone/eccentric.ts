@@ -4,13 +4,12 @@
  */
 import { frustumNormal, norm, sheetElement, sub, type ConeElement, type Vec3 } from '@girth/geometry';
 import type { PathPart, Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
-import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_CAUTION } from './internal/cone-text.js';
+import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_CAUTION, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
 import { conePipes } from './internal/cone-pipes.js';
-import { CONE_LABEL_HEIGHT_MM } from './concentric.js';
 import { boundsOfPoints, movePoint, toPlateOrigin, uprightRotation } from './internal/plate-frame.js';
 import { resolveCone, resolveEccentricOptions, type ResolvedCone } from './internal/resolve-cone.js';
 import { subStationsPerStation } from './internal/sub-stations.js';
-import type { ConePiece, ConeSpec, EccentricConeLayout, EccentricConeOptions, EccentricConeSpec } from './types.js';
+import type { ConePiece, EccentricConeLayout, EccentricConeOptions, EccentricConeSpec } from './types.js';
 import { unfoldStrip } from './unfold-strip.js';
 
 const TWO_PI = 2 * Math.PI;
@@ -53,7 +52,7 @@ const TWO_PI = 2 * Math.PI;
  * r.templates[0]?.stations[0]?.lengthsMm.element // 178: the flat side (seam on it)
  */
 export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricConeOptions = {}): EccentricConeLayout {
-  const cone = resolveCone(spec as ConeSpec, options, 'eccentric');
+  const cone = resolveCone(spec, options, 'eccentric');
   const { seam, chordToleranceMm } = resolveEccentricOptions(options);
   const N = cone.stations;
   const k = cone.segments;

@@ -81,11 +81,13 @@ export interface ConeEndInfo {
 export interface ConePiece {
   /** Id of the template of this piece. */
   readonly templateId: string;
-  /** Where the piece starts and ends around the cone, degrees from the seam. */
+  /** Where the piece starts around the cone, degrees from the seam. */
   readonly startAngleDeg: number;
+  /** Where the piece ends around the cone, degrees from the seam. */
   readonly endAngleDeg: number;
-  /** Bounding rectangle of the pattern as drawn (it starts at plate (0, 0)), mm. */
+  /** Width of the pattern's bounding rectangle (it starts at plate (0, 0)), mm. */
   readonly widthMm: number;
+  /** Height of the pattern's bounding rectangle, mm. */
   readonly heightMm: number;
 }
 
@@ -95,11 +97,13 @@ export interface ConcentricConePiece extends ConePiece {
   readonly sweepDeg: number;
   /** Centre of both arcs (the cone's apex) in plate coordinates, mm; often off the plate. */
   readonly centerMm: Point2;
-  /** Straight distance between the ends of the outer arc, and the arc's height over it, mm. */
+  /** Straight distance between the ends of the outer arc, mm. */
   readonly outerChordMm: number;
+  /** Height of the outer arc over its chord, mm. */
   readonly outerRiseMm: number;
-  /** The same for the inner arc, mm. */
+  /** Straight distance between the ends of the inner arc, mm. */
   readonly innerChordMm: number;
+  /** Height of the inner arc over its chord, mm. */
   readonly innerRiseMm: number;
 }
 
@@ -121,9 +125,13 @@ export interface ConePattern {
 
 /** Fields common to both reducer layouts. */
 export interface ConeLayoutBase extends LayoutResult {
+  /** Contract kind of every reducer result. */
   readonly kind: 'reducer';
+  /** Concentric (right cone) or eccentric (one side flat). */
   readonly form: 'concentric' | 'eccentric';
+  /** The plate surface the given diameters are on. */
   readonly diametersAt: DiameterSurface;
+  /** Plate thickness, mm. */
   readonly thicknessMm: number;
   /** Axial length between the end planes, mm. */
   readonly lengthMm: number;
@@ -131,22 +139,29 @@ export interface ConeLayoutBase extends LayoutResult {
   readonly apexAngleDeg: number;
   /** Largest angle between an element and the axis, degrees. */
   readonly maxInclinationDeg: number;
+  /** Stations around the cone, N. */
   readonly stationCount: number;
+  /** Pieces the cone is made of, one template each. */
   readonly segmentCount: number;
+  /** The two ends: given diameters and the girths the pattern's edges must measure. */
   readonly ends: { readonly large: ConeEndInfo; readonly small: ConeEndInfo };
 }
 
 /** What {@link layoutConcentricCone} returns. */
 export interface ConcentricConeLayout extends ConeLayoutBase {
   readonly form: 'concentric';
+  /** The whole cone's development (contract field). */
   readonly pattern: ConePattern;
+  /** One entry per template, in order. */
   readonly pieces: readonly ConcentricConePiece[];
 }
 
 /** What {@link layoutEccentricCone} returns. */
 export interface EccentricConeLayout extends ConeLayoutBase {
   readonly form: 'eccentric';
+  /** Where the seam lies. */
   readonly seam: EccentricSeam;
+  /** One entry per template, in order. */
   readonly pieces: readonly ConePiece[];
   /** How finely the outline was drawn. */
   readonly outline: {

@@ -28,7 +28,9 @@ export interface UnfoldedStrip {
  *
  * @throws GirthError `BAD_OPTION` (field `strip`) for edges of different or too few points,
  *   or a triangle with a side of zero length.
- * @example unfoldStrip([[0,0,0],[1,0,0]], [[0,0,-1],[1,0,-1]], [0,1,0]).large[1] // [1, 0] (or [-1, 0] seen from the other side)
+ * @example
+ * // A flat square seen from +y: the large edge runs to the left of the first element.
+ * unfoldStrip([[0, 0, 0], [1, 0, 0]], [[0, 0, -1], [1, 0, -1]], [0, 1, 0]).large[1] // ≈ [-1, 0]
  */
 export function unfoldStrip(large: readonly Vec3[], small: readonly Vec3[], viewFrom: Vec3): UnfoldedStrip {
   const n = large.length;

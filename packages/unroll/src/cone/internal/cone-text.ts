@@ -12,6 +12,9 @@ export const CONE_CAUTION =
   'CAUTION: verify against the actual pipe and plate before cutting; follow qualified procedures, ASME B31.1/B31.3, ' +
   'local rules and licensed practice. Girth lays out geometry only and does not size reinforcement.';
 
+/** Cap height of the labels a cone pattern places itself (SEAM, FLAT SIDE), mm. */
+export const CONE_LABEL_HEIGHT_MM = 5;
+
 /**
  * Elements leaning more than this from the axis get a warning: a cone-to-pipe
  * junction steeper than a 30° half-apex angle falls outside the simple rules for
@@ -38,7 +41,10 @@ export function coneWarnings(cone: ResolvedCone): readonly GirthWarning[] {
   return warnings;
 }
 
-/** Degrees for text, two decimals. */
+/**
+ * Degrees for text, two decimals.
+ * @example deg(126.404) // '126.40°'
+ */
 export function deg(value: number): string {
   return `${value.toFixed(2)}°`;
 }

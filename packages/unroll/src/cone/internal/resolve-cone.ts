@@ -15,8 +15,9 @@ import {
 import { GirthError, requireInRange, requireInteger, requirePositive } from '@girth/pipes';
 import type { ConeLayoutOptions, ConeSpec, EccentricConeOptions, EccentricSeam } from '../types.js';
 
-/** Stations around a cone: fewest and most. */
+/** Fewest stations around a cone: 4, one every 90°. */
 export const CONE_MIN_STATIONS = 4;
+/** Most stations around a cone: 360, one every degree. */
 export const CONE_MAX_STATIONS = 360;
 /** Stations when none are asked for: 16 of 22.5°, as the trade divides a girth (common practice). */
 export const CONE_DEFAULT_STATIONS = 16;
@@ -42,7 +43,10 @@ export interface ResolvedCone {
   readonly formatLength: (mm: number) => string;
 }
 
-/** Default length format of titles and notes: two decimals in mm. */
+/**
+ * Default length format of titles and notes: two decimals in mm.
+ * @example formatMm(219.1) // '219.10 mm'
+ */
 export const formatMm = (mm: number): string => `${mm.toFixed(2)} mm`;
 
 const SURFACE_PREFIX: Readonly<Record<DiameterSurface, string>> = { outside: 'OD', inside: 'ID', mean: 'mean dia.' };
@@ -135,9 +139,11 @@ export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: Co
   };
 }
 
-/** Default and range of the eccentric outline's chord tolerance, mm. */
+/** Default chord tolerance of an eccentric cone's outline, mm: far inside what a fitter can mark or cut. */
 export const CONE_DEFAULT_CHORD_TOLERANCE_MM = 0.05;
+/** Smallest chord tolerance accepted, mm (1 µm; finer only multiplies points). */
 export const CONE_MIN_CHORD_TOLERANCE_MM = 0.001;
+/** Largest chord tolerance accepted, mm (a rough sketch; a cut needs far less). */
 export const CONE_MAX_CHORD_TOLERANCE_MM = 5;
 
 /**
