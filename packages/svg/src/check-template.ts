@@ -18,7 +18,12 @@ function checkPoint(p: Point2, field: string): void {
   requireInRange(p[1], `${field}[1]`, -MAX_COORD_MM, MAX_COORD_MM, { unit: 'mm' });
 }
 
-/** Sweep of an arc from `startDeg` counter-clockwise to `endDeg`, in (0, 360]. */
+/**
+ * Sweep of an arc from `startDeg` counter-clockwise to `endDeg`, degrees: 360 for a
+ * full circle (`endDeg - startDeg >= 360`), 0 for an arc of no sweep, else in (0, 360).
+ *
+ * @example arcSweepDeg(350, 10) // 20
+ */
 export function arcSweepDeg(startDeg: number, endDeg: number): number {
   const raw = endDeg - startDeg;
   if (raw >= 360) return 360;

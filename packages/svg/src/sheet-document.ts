@@ -17,7 +17,11 @@ const oneLine = (s: string): string => textLines(s).join(' ');
 /** Round a length for metadata (0.001 mm). */
 const mm3 = (v: number): string => String(Math.round(v * 1000) / 1000);
 
-/** `<title>`, `<desc>` and `<metadata>` for a sheet. */
+/**
+ * `<title>`, `<desc>` and `<metadata>` for a sheet (user text cleaned to one line).
+ *
+ * @example describeSheet(template, resolveSvgOptions({ job: 'J-1' }))[0].name // 'title'
+ */
 export function describeSheet(template: Template, options: ResolvedSvgOptions): INode[] {
   const who = [options.job, options.piece].filter((s): s is string => s !== undefined).map(oneLine);
   const title = [...who, oneLine(template.title)].join(' — ');

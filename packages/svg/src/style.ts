@@ -54,9 +54,15 @@ export const FONT_MM = {
 
 /** Cap height of the sans fonts named, as a fraction of the font size (DejaVu Sans 0.73, Arial 0.72). */
 export const CAP_HEIGHT_EM = 0.73;
-/** Ascent above the baseline and descent below it allowed for any glyph, em. */
+/** Ascent above the baseline allowed for any glyph, em. */
 export const ASCENT_EM = 0.95;
+/** Descent below the baseline allowed for any glyph, em. */
 export const DESCENT_EM = 0.3;
+/**
+ * Left-aligned text starts this far in from its edge, em: some glyphs (a bold J)
+ * reach left of their origin.
+ */
+export const TEXT_INSET_EM = 0.1;
 /** Distance between baselines, em. */
 export const LINE_EM = 1.35;
 

@@ -180,14 +180,30 @@ describe('templateToSvg: arcs and closed contours', () => {
     // Worked example (REFERENCES.md; "Drawing Nets", ceemrr.com Geometry2/DrawingsNets6):
     // an 8 in to 5 in cone 4 in long has pattern radii 11.39 and 7.12 in and a 126.4° sweep.
     const root = parseSvg(templateToSvg(coneSector(8 * IN, 5 * IN, 4 * IN), { sheetUnits: 'in' }));
-    const arcs = paths(byId(root, 'cut')).flatMap((p) => p.arcs);
-    expect(arcs).toHaveLength(2);
-    const radii = arcs.map((a) => a.r).sort((a, b) => a - b);
+    const arcPaths = paths(byId(root, 'cut')).filter((p) => p.arcs.length > 0);
+    expect(arcPaths).toHaveLength(2);
+    const radii = arcPaths.map((p) => p.arcs[0]?.r ?? NaN).sort((a, b) => a - b);
     expectClose(radii[0] as number, 7.12, 0.005, 'inner radius, in (published to 0.01 in)');
     expectClose(radii[1] as number, 11.39, 0.005, 'outer radius, in (published to 0.01 in)');
-    for (const a of arcs) expectClose(Math.abs(a.sweepDeg), 126.4, 0.05, 'sweep, degrees (published to 0.1°)');
-    // The two arcs share their centre: a true annular sector.
-    expectClose(Math.hypot((arcs[0]?.cx ?? 0) - (arcs[1]?.cx ?? 0), (arcs[0]?.cy ?? 0) - (arcs[1]?.cy ?? 0)), 0, 1e-4, 'common centre');
+    for (const p of arcPaths) {
+      const sweep = p.arcs.reduce((sum, a) => sum + Math.abs(a.sweepDeg), 0);
+      expectClose(sweep, 126.4, 0.05, 'sweep, degrees (published to 0.1°)');
+    }
+    // Every piece of both arcs has the same centre: a true annular sector.
+    const all = arcPaths.flatMap((p) => p.arcs);
+    for (const a of all) expectClose(Math.hypot(a.cx - all[0]!.cx, a.cy - all[0]!.cy), 0, 1e-4, 'common centre, in');
+  });
+
+  test('an arc near 180° keeps its centre after rounding (written in pieces of at most 90°)', () => {
+    // Invariant: the centre read back from the written endpoints and radius (SVG 1.1 F.6.5).
+    for (const sweep of [179.5, 179.99, 180, 180.2, 270]) {
+      const t = { ...teeHole(100, 20), marks: [], labels: [], cut: [{ kind: 'arc' as const, center: [0, 0] as const, radiusMm: 650, startDeg: 13, endDeg: 13 + sweep }] };
+      const root = parseSvg(templateToSvg(t, { marginMm: 0 }));
+      const arcs = paths(byId(root, 'cut')).flatMap((p) => p.arcs);
+      for (const a of arcs) expect(Math.abs(a.sweepDeg)).toBeLessThanOrEqual(90.001); // 90° plus rounding
+      for (const a of arcs) expectClose(Math.hypot(a.cx - arcs[0]!.cx, a.cy - arcs[0]!.cy), 0, 0.005, `centre drift, sweep ${sweep}°`);
+      expectClose(arcs.reduce((s, a) => s + Math.abs(a.sweepDeg), 0), sweep, 0.001, 'total sweep');
+    }
   });
 
   test('a full circle is drawn whole', () => {

@@ -21,7 +21,11 @@ export function isEmptyBox(b: Box): boolean {
   return b.minX > b.maxX || b.minY > b.maxY;
 }
 
-/** The smallest box holding both. */
+/**
+ * The smallest box holding both.
+ *
+ * @example unionBox(EMPTY_BOX, b) // b
+ */
 export function unionBox(a: Box, b: Box): Box {
   return {
     minX: Math.min(a.minX, b.minX),
@@ -51,7 +55,11 @@ export function pointsBox(points: readonly Point2[]): Box {
   return { minX, minY, maxX, maxY };
 }
 
-/** The box of a path part; an arc's box includes the quadrant points it passes (measured by makerjs). */
+/**
+ * The box of a path part, mm; an arc's box includes the quadrant points it passes (measured by makerjs).
+ *
+ * @example partBox({ kind: 'arc', center: [0, 0], radiusMm: 10, startDeg: 0, endDeg: 180 }) // { minX: -10, minY: 0, maxX: 10, maxY: 10 }
+ */
 export function partBox(part: PathPart): Box {
   switch (part.kind) {
     case 'polyline':

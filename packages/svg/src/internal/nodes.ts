@@ -5,20 +5,31 @@
 import type { INode } from 'svgson';
 import { attrText, cdataSafePieces, textLines } from './safe-text.js';
 
+const PRINTABLE_ASCII = /^[\x20-\x7E]*$/;
+
 /** Attribute values; `undefined` leaves the attribute out. */
 export type Attrs = Readonly<Record<string, string | undefined>>;
 
 /**
  * An element node. Attribute values are user-safe: controls are dropped here and
  * svgson escapes `& < > " '` when writing.
+ *
+ * @example el('g', { id: 'cut', class: 'cut' })
  */
 export function el(name: string, attributes: Attrs, children: readonly INode[] = []): INode {
   const attrs: Record<string, string> = {};
-  for (const [k, v] of Object.entries(attributes)) if (v !== undefined) attrs[k] = attrText(v);
+  for (const [k, v] of Object.entries(attributes)) {
+    // Printable ASCII needs no cleaning (svgson escapes it); skipping the clean-up keeps long path data fast.
+    if (v !== undefined) attrs[k] = PRINTABLE_ASCII.test(v) ? v : attrText(v);
+  }
   return { name, type: 'element', value: '', attributes: attrs, children: [...children] };
 }
 
-/** Text nodes holding one line of (already cleaned) text, cut so svgson's CDATA cannot be broken out of. */
+/**
+ * Text nodes holding one line of (already cleaned) text, cut so svgson's CDATA cannot be broken out of.
+ *
+ * @example textNodes('a]]>b').map((n) => n.value) // ['a]]', '>b']
+ */
 export function textNodes(line: string): INode[] {
   return cdataSafePieces(line).map((value) => ({ name: '', type: 'text', value, attributes: {}, children: [] }));
 }
@@ -30,6 +41,7 @@ export function textNodes(line: string): INode[] {
  * @param x - paper x of every line, as written (sheet units).
  * @param y - paper y of the first baseline, as written (sheet units).
  * @param lineDy - distance between baselines, as written (sheet units).
+ * @example textElement('HEEL', { x: '10', y: '20', 'font-size': '5' }, '6.75')
  */
 export function textElement(
   text: string,

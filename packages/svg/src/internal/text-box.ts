@@ -24,6 +24,7 @@ export interface CentredText {
  * @param centre - template mm, y-up.
  * @param fontMm - font size, mm.
  * @param bold - true for bold type (wider).
+ * @example centredText(['TOE'], [264, -10], 5.5, true).baseline // [264, -12.0075]
  */
 export function centredText(lines: readonly string[], centre: Point2, fontMm: number, bold = false): CentredText {
   const cap = CAP_HEIGHT_EM * fontMm;

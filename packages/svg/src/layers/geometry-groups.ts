@@ -22,7 +22,11 @@ function strokeAttrs(w: NumberWriter, color: string, widthMm: number, dashMm?: r
   };
 }
 
-/** The cut line(s): heavy black, one `<path>` per part. */
+/**
+ * The cut line(s): heavy black, one `<path>` per part.
+ *
+ * @example cutGroup(template, frame, numberWriter('mm')).attributes.id // 'cut'
+ */
 export function cutGroup(template: Template, frame: Frame, w: NumberWriter): INode {
   return el(
     'g',

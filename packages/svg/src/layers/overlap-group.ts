@@ -12,7 +12,11 @@ import { paperLinesData } from '../internal/path-data.js';
 import type { OverlapPlan } from './overlap-plan.js';
 import { centredTextNode } from './geometry-groups.js';
 
-/** 45° hatching of a paper rectangle (mm, y-down), clipped to it exactly. */
+/**
+ * 45° hatching of a paper rectangle (mm, y-down), clipped to it exactly.
+ *
+ * @example hatchLines(0, 0, 10, 10, 4).length // 4
+ */
 export function hatchLines(x0: number, y0: number, x1: number, y1: number, spacingMm: number): [Point2, Point2][] {
   const w = x1 - x0;
   const h = y1 - y0;
@@ -29,7 +33,11 @@ export function hatchLines(x0: number, y0: number, x1: number, y1: number, spaci
   return out;
 }
 
-/** The `overlap` group: empty when there is no tab. */
+/**
+ * The `overlap` group: empty when there is no tab.
+ *
+ * @example overlapGroup(undefined, frame, numberWriter('mm')).children // []
+ */
 export function overlapGroup(plan: OverlapPlan | undefined, frame: Frame, w: NumberWriter): INode {
   if (!plan) return el('g', { id: 'overlap', class: 'overlap' });
   const x0 = frame.x(plan.tab.minX);

@@ -4,7 +4,7 @@
  */
 import type { INode } from 'svgson';
 import type { SheetUnits } from '../types.js';
-import { ASCENT_EM, CALIBRATION, CAP_HEIGHT_EM, DESCENT_EM, FONT_FAMILY, FONT_MM, INK, LINE_EM } from '../style.js';
+import { ASCENT_EM, CALIBRATION, CAP_HEIGHT_EM, DESCENT_EM, FONT_FAMILY, FONT_MM, INK, LINE_EM, TEXT_INSET_EM } from '../style.js';
 import { SHEET_CAUTION } from '../cautions.js';
 import { el, textElement } from '../internal/nodes.js';
 import type { NumberWriter } from '../internal/numbers.js';
@@ -14,6 +14,8 @@ import type { TitleLine } from './title-lines.js';
 
 /** Gap between the rule and the first line, and around the calibration row, mm. */
 const ROW_GAP_MM = 2;
+/** Weight of the rule over the title block, mm. */
+const RULE_MM = 0.25;
 /** Gap between the calibration bar and its caption, mm. */
 const CAPTION_GAP_MM = 4;
 
@@ -38,7 +40,7 @@ export function planTitleBlock(titleLines: readonly TitleLine[], units: SheetUni
   const lines = titleLines.map((line) => {
     const baselineMm = cursor + ASCENT_EM * line.fontMm;
     cursor += LINE_EM * line.fontMm;
-    widthMm = Math.max(widthMm, textWidthMm(line.text, line.fontMm, line.bold));
+    widthMm = Math.max(widthMm, (TEXT_INSET_EM * line.fontMm) + textWidthMm(line.text, line.fontMm, line.bold));
     return { ...line, baselineMm };
   });
   cursor += ROW_GAP_MM;
@@ -51,7 +53,7 @@ export function planTitleBlock(titleLines: readonly TitleLine[], units: SheetUni
   const barTop = cursor + (rowMm - heightMm) / 2;
   const barCaption = {
     text: captionText,
-    xMm: lengthMm + CAPTION_GAP_MM,
+    xMm: lengthMm + CAPTION_GAP_MM + TEXT_INSET_EM * captionFont,
     baselineMm: barTop + heightMm / 2 + (CAP_HEIGHT_EM * captionFont) / 2,
     fontMm: captionFont,
   };
@@ -59,7 +61,7 @@ export function planTitleBlock(titleLines: readonly TitleLine[], units: SheetUni
   cursor += rowMm + ROW_GAP_MM;
   const cautionFont = FONT_MM.caution;
   const caution = { text: SHEET_CAUTION, baselineMm: cursor + ASCENT_EM * cautionFont, fontMm: cautionFont };
-  widthMm = Math.max(widthMm, textWidthMm(SHEET_CAUTION, cautionFont, true));
+  widthMm = Math.max(widthMm, TEXT_INSET_EM * cautionFont + textWidthMm(SHEET_CAUTION, cautionFont, true));
   cursor += LINE_EM * cautionFont;
   return { lines, bar: { topMm: barTop, lengthMm, heightMm }, barCaption, caution, widthMm, heightMm: cursor };
 }
@@ -70,14 +72,19 @@ export function planTitleBlock(titleLines: readonly TitleLine[], units: SheetUni
  */
 export function titleBlockGroup(plan: TitleBlockPlan, left: number, top: number, ruleMm: number, w: NumberWriter): INode {
   const text = (t: string, baselineMm: number, fontMm: number, attrs: Record<string, string | undefined>) =>
-    textElement(t, { x: w.len(left), y: w.len(top + baselineMm), 'font-size': w.len(fontMm), ...attrs }, w.len(LINE_EM * fontMm));
+    textElement(
+      t,
+      { x: w.len(left + TEXT_INSET_EM * fontMm), y: w.len(top + baselineMm), 'font-size': w.len(fontMm), ...attrs },
+      w.len(LINE_EM * fontMm),
+    );
   return el('g', { id: 'title-block', class: 'title-block', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY }, [
     el('path', {
       class: 'title-rule',
-      d: paperLinesData([[[left, top], [left + ruleMm, top]]], w),
+      // Inset by half its weight so even a renderer that pads every stroke on all sides stays inside.
+      d: paperLinesData([[[left + RULE_MM / 2, top], [left + ruleMm - RULE_MM / 2, top]]], w),
       fill: 'none',
       stroke: INK.mid,
-      'stroke-width': w.len(0.25),
+      'stroke-width': w.len(RULE_MM),
     }),
     ...plan.lines.map((l) =>
       text(l.text, l.baselineMm, l.fontMm, { class: `title-${l.role}`, 'font-weight': l.bold ? 'bold' : undefined }),

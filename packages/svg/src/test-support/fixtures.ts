@@ -7,8 +7,9 @@ import type { PathPart, Point2, StationLine, StationRow, Template } from '@girth
 
 const DEG = Math.PI / 180;
 
-/** Invented job and piece for demo sheets. */
+/** Invented job for demo sheets. */
 export const DEMO_JOB = 'J-4417 Brinewell cooling loop';
+/** Invented piece for demo sheets. */
 export const DEMO_PIECE = 'Spool 12-B';
 
 /**

@@ -1,7 +1,7 @@
 /**
  * Golden-file checks for SVG output: a reusable harness for any package's tests.
  *
- * `expectGolden(dir, name, svg)` normalises float noise in the SVG and compares it
+ * `expectGolden(dir, name, svg)` normalises the SVG (float noise, line breaks) and compares it
  * byte for byte with `<dir>/<name>.svg`. With `UPDATE_GOLDEN=1` in the environment it
  * (re)writes the file instead, atomically, so goldens change only on purpose.
  */
@@ -9,17 +9,30 @@ import { existsSync, readFileSync, renameSync, writeFileSync, mkdirSync } from '
 import { join } from 'node:path';
 
 /**
- * Every decimal number after the XML declaration rounded to `decimals` places
- * (trailing zeros and `-0` dropped): removes last-digit float noise between machines.
- *
- * @example normaliseSvgNumbers('<svg><path d="M1.2345 -0.001"/></svg>') // '<svg><path d="M1.23 0"/></svg>'
+ * Decimal places kept by default: 2 on a sheet in mm (0.01 mm), 4 on a sheet in inches
+ * (0.0001 in = 0.00254 mm): one place fewer than the exporter writes.
  */
-export function normaliseSvgNumbers(svg: string, decimals = 2): string {
+export function defaultDecimals(svg: string): number {
+  return /<svg\b[^>]*\bwidth="[0-9.]+in"/.test(svg) ? 4 : 2;
+}
+
+/**
+ * The SVG in a form fit to compare: every decimal number after the XML declaration
+ * rounded to `decimals` places (trailing zeros and `-0` dropped), which removes
+ * last-digit float noise between machines, and a line break between adjacent tags so
+ * a difference shows on its own line.
+ *
+ * @example normaliseSvgForGolden('<svg><path d="M1.2345 -0.001"/></svg>') // '<svg>\n<path d="M1.23 0"/>\n</svg>'
+ */
+export function normaliseSvgForGolden(svg: string, decimals = defaultDecimals(svg)): string {
   const decl = /^<\?xml[^>]*\?>/.exec(svg)?.[0] ?? '';
-  const body = svg.slice(decl.length).replace(/-?\d+\.\d+/g, (tok) => {
-    const r = Number(Number(tok).toFixed(decimals));
-    return r === 0 ? '0' : String(r);
-  });
+  const body = svg
+    .slice(decl.length)
+    .replace(/-?\d+\.\d+/g, (tok) => {
+      const r = Number(Number(tok).toFixed(decimals));
+      return r === 0 ? '0' : String(r);
+    })
+    .replace(/></g, '>\n<');
   return decl + body;
 }
 
@@ -41,7 +54,7 @@ function firstDifference(expected: string, actual: string): string {
 
 /** Options of {@link expectGolden}. */
 export interface GoldenOptions {
-  /** Decimal places kept by the normalisation (default 2). */
+  /** Decimal places kept by the normalisation (default: see {@link defaultDecimals}). */
   readonly decimals?: number;
   /** Write the golden instead of comparing (default: `UPDATE_GOLDEN=1` in the environment). */
   readonly update?: boolean;
@@ -55,7 +68,7 @@ export interface GoldenOptions {
  */
 export function expectGolden(dir: string, name: string, svg: string, options: GoldenOptions = {}): void {
   const file = join(dir, `${name}.svg`);
-  const actual = normaliseSvgNumbers(svg, options.decimals ?? 2);
+  const actual = normaliseSvgForGolden(svg, options.decimals ?? defaultDecimals(svg));
   const update = options.update ?? process.env.UPDATE_GOLDEN === '1';
   if (update) {
     mkdirSync(dir, { recursive: true });

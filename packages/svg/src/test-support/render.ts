@@ -27,6 +27,14 @@ export function resvgOf(svg: string, dpi = 96): Resvg {
   return new Resvg(svg, { dpi, background: 'white', font: fontOptions() });
 }
 
+/**
+ * Parses the SVG with resvg's strict XML reader (no fonts loaded, so it is quick).
+ * @throws Error when the document is not well-formed XML or not an SVG.
+ */
+export function strictParse(svg: string): void {
+  new Resvg(svg, { font: { loadSystemFonts: false } });
+}
+
 /** A rendered picture: size in pixels and RGBA bytes. */
 export interface Picture {
   readonly width: number;
