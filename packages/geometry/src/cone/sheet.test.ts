@@ -68,7 +68,8 @@ describe('mean surface of a rolled cone', () => {
         const f = makeConeFrustum({ largeRadiusMm: R, smallRadiusMm: r, lengthMm: c.lengthMm, offsetMm: R - r });
         const lean = Math.atan((2 * (R - r)) / c.lengthMm);
         expectNear(maxPlateThicknessMm(f, 'outside'), r * Math.cos(lean), 1e-9 * r, 'limit, outside');
-        expectNear(maxPlateThicknessMm(f, 'mean'), 2 * r * Math.cos(lean), 1e-9 * r, 'limit, mean');
+        expectNear(maxPlateThicknessMm(f, 'mean'), Math.min(r, 2 * r * Math.cos(lean)), 1e-9 * r, 'limit, mean');
+        expect(maxPlateThicknessMm(f, 'inside')).toBe(r);
       }),
     );
   });
@@ -86,7 +87,8 @@ describe('mean surface of a rolled cone', () => {
       expect((e as { field: string }).field).toBe('thicknessMm');
       expect((e as Error).message).toContain(limit.toFixed(3));
     }
-    expect(() => makeConeSheet(f, 50, 'inside')).not.toThrow();
+    expect(() => makeConeSheet(f, 9.9, 'inside')).not.toThrow();
+    expect(() => makeConeSheet(f, 10, 'inside')).toThrow(/thinner than 10\.000 mm/);
     expect(() => makeConeSheet(f, -1, 'outside')).toThrow(/thicknessMm/);
     expect(() => makeConeSheet(f, 1, 'middle' as never)).toThrow(/diametersAt/);
   });

@@ -43,20 +43,23 @@ function endShiftFactor(frustum: ConeFrustum, thetaRad: number): number {
 
 /**
  * The thickest plate (mm, exclusive) that `given` can be rolled from when its
- * end diameters belong to `diametersAt`: the inside surface must keep a small
- * end, so the largest sideways move of the small end's edge toward the axis
- * must stay below the small radius. Infinity when the inside itself was given.
+ * end diameters belong to `diametersAt`. Two limits, the smaller counts:
+ * the inside surface must keep a small end (the largest sideways move of the
+ * small end's edge toward the axis stays below the small radius), and the
+ * plate must be thinner than the small end's radius, which no roll can bend
+ * plate thicker than.
  * @example maxPlateThicknessMm(frustum, 'outside')
  */
 export function maxPlateThicknessMm(given: ConeFrustum, diametersAt: DiameterSurface): number {
   const f = maxEndShiftFactor(given);
+  const r = given.smallRadiusMm;
   switch (diametersAt) {
     case 'outside':
-      return given.smallRadiusMm / f;
+      return r / f;
     case 'mean':
-      return (2 * given.smallRadiusMm) / f;
+      return Math.min(r, (2 * r) / f);
     case 'inside':
-      return Infinity;
+      return r;
   }
 }
 
@@ -66,7 +69,7 @@ export function maxPlateThicknessMm(given: ConeFrustum, diametersAt: DiameterSur
  *
  * @param thicknessMm plate thickness, mm, ≥ 0 and below {@link maxPlateThicknessMm}.
  * @throws GirthError `NEGATIVE`/`NOT_A_NUMBER`/`NOT_FINITE` for a bad thickness,
- *   `WALL_TOO_THICK` (field `thicknessMm`) when the plate leaves no inside surface,
+ *   `WALL_TOO_THICK` (field `thicknessMm`) at or above {@link maxPlateThicknessMm},
  *   `BAD_OPTION` (field `diametersAt`) for an unknown surface.
  * @example makeConeSheet(frustum, 6, 'outside').normalShiftMm // -3
  */
@@ -96,7 +99,7 @@ export function makeConeSheet(given: ConeFrustum, thicknessMm: number, diameters
     throw new GirthError(
       'WALL_TOO_THICK',
       'thicknessMm',
-      `thicknessMm: ${t} mm plate leaves no inside surface at the small end (${diametersAt} diameter ` +
+      `thicknessMm: ${t} mm plate is too thick for the small end (${diametersAt} diameter ` +
         `${(2 * given.smallRadiusMm).toFixed(3)} mm); it must be thinner than ${limit.toFixed(3)} mm`,
       thicknessMm,
     );

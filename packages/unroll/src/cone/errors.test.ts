@@ -51,9 +51,11 @@ describe.each(both)('%s cone: bad input gets a typed error naming the field and 
     expectError(() => layout({ ...good, lengthMm: undefined, apexAngleDeg: 0 }), 'OUT_OF_RANGE', 'apexAngleDeg');
     expectError(() => layout({ ...good, lengthMm: undefined, apexAngleDeg: 180 }), 'OUT_OF_RANGE', 'apexAngleDeg');
   });
-  it('plate that leaves no inside surface at the small end', () => {
+  it('plate too thick for the small end', () => {
     expectError(() => layout({ ...good, thicknessMm: 84.15 }), 'WALL_TOO_THICK', 'thicknessMm', /thinner than \d+\.\d{3} mm/);
     expectError(() => layout({ ...good, thicknessMm: 200 }), 'WALL_TOO_THICK', 'thicknessMm');
+    // Inside diameters given: still no thicker than the small end's radius.
+    expectError(() => layout({ ...good, diametersAt: 'inside', thicknessMm: 168.3 / 2 }), 'WALL_TOO_THICK', 'thicknessMm');
   });
   it('stations outside 4..360, segments outside 1..stations or not dividing them', () => {
     expectError(() => layout(good, { stations: 3 }), 'OUT_OF_RANGE', 'stations', /from 4 to 360/);

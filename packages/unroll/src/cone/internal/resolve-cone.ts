@@ -61,7 +61,7 @@ const SURFACE_PREFIX: Readonly<Record<DiameterSurface, string>> = { outside: 'OD
  *   4..360 or segments outside 1..stations; `BAD_OPTION` for both or neither of
  *   length and angle, segments that do not divide the stations, an unknown
  *   `diametersAt` or label/formatter of the wrong type; `WALL_TOO_THICK` for a
- *   plate that leaves no inside surface.
+ *   plate too thick for the small end (see `maxPlateThicknessMm`).
  * @example resolveCone({ largeDiameterMm: 219.1, smallDiameterMm: 168.3, lengthMm: 152, thicknessMm: 6 }, {}, 'concentric').lengthMm // 152
  */
 export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: ConeForm): ResolvedCone {
