@@ -1,0 +1,155 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { GirthError } from '../errors.js';
+import { formatLength } from './format.js';
+import { roundToFraction } from './fraction.js';
+import { parseLength } from './parse.js';
+import { MM_PER_INCH } from './units.js';
+
+const inch = (value: number): number => value * MM_PER_INCH;
+
+function codeOf(fn: () => unknown): string {
+  try {
+    fn();
+  } catch (e) {
+    if (e instanceof GirthError) return e.code;
+    throw e;
+  }
+  return 'no error';
+}
+
+describe('formatLength: feet-inch-fractions', () => {
+  // Expected strings follow the trade's way of writing tape readings (common
+  // practice): feet-inches with a hyphen, reduced fractions, under a foot as inches.
+  const cases: ReadonlyArray<readonly [number, string, (8 | 16 | 32)?]> = [
+    [inch(18.1875), `1'-6 3/16"`],
+    [inch(6.1875), `6 3/16"`],
+    [inch(0.75), `3/4"`],
+    [inch(6.5), `6 1/2"`],
+    [inch(6), `6"`],
+    [inch(12), `1'-0"`],
+    [inch(11 + 15 / 16 + 1 / 16), `1'-0"`],
+    [inch(11.97), `1'-0"`],
+    [inch(60), `5'-0"`],
+    [inch(12 + 3 / 16), `1'-0 3/16"`],
+    [inch(23.99), `2'-0"`],
+    [0, `0"`],
+    [0.01, `0"`],
+    [-0.01, `0"`],
+    [inch(-18.1875), `-1'-6 3/16"`],
+    [inch(-0.5), `-1/2"`],
+    // 6 3/16 in lies halfway between 6 1/8 and 6 1/4: halves round away from zero.
+    [inch(6.1875), `6 1/4"`, 8],
+    [inch(-6.1875), `-6 1/4"`, 8],
+    [inch(6 + 7 / 32), `6 7/32"`, 32],
+    [inch(12.5), `1'-0 1/2"`, 32],
+    [inch(0.02), `1/32"`, 32],
+    [inch(120 * 12 + 11.99), `121'-0"`],
+  ];
+  for (const [mm, text, fraction] of cases) {
+    it(`writes ${mm} mm as ${text}${fraction ? ` (1/${fraction})` : ''}`, () => {
+      expect(formatLength(mm, { format: 'ft-in', ...(fraction ? { fraction } : {}) })).toBe(text);
+    });
+  }
+});
+
+describe('formatLength: decimal styles', () => {
+  it('writes millimetres with 1 decimal by default', () => {
+    expect(formatLength(461.9625, { format: 'mm' })).toBe('462.0 mm');
+    expect(formatLength(461.9625, { format: 'mm', decimals: 2 })).toBe('461.96 mm');
+    expect(formatLength(406.4, { format: 'mm', decimals: 0 })).toBe('406 mm');
+    expect(formatLength(-0.04, { format: 'mm' })).toBe('0.0 mm');
+    expect(formatLength(-12.34, { format: 'mm' })).toBe('-12.3 mm');
+  });
+
+  it('writes inches with 3 decimals by default', () => {
+    expect(formatLength(406.4, { format: 'in' })).toBe('16.000"');
+    expect(formatLength(inch(0.375), { format: 'in' })).toBe('0.375"');
+    expect(formatLength(inch(18.1875), { format: 'in', decimals: 4 })).toBe('18.1875"');
+    expect(formatLength(inch(-0.0001), { format: 'in' })).toBe('0.000"');
+  });
+
+  it('refuses bad values and options with typed errors', () => {
+    expect(codeOf(() => formatLength(Number.NaN, { format: 'mm' }))).toBe('NOT_A_NUMBER');
+    expect(codeOf(() => formatLength(Number.POSITIVE_INFINITY, { format: 'ft-in' }))).toBe('NOT_FINITE');
+    expect(codeOf(() => formatLength(1, { format: 'ft-in', fraction: 64 as 16 }))).toBe('BAD_OPTION');
+    expect(codeOf(() => formatLength(1, { format: 'mm', decimals: 7 }))).toBe('BAD_OPTION');
+    expect(codeOf(() => formatLength(1, { format: 'in', decimals: 1.5 }))).toBe('BAD_OPTION');
+    expect(codeOf(() => formatLength(1, { format: 'yd' as 'mm' }))).toBe('BAD_OPTION');
+    expect(codeOf(() => formatLength(1e300, { format: 'ft-in' }))).toBe('OUT_OF_RANGE');
+  });
+});
+
+/** Lengths from -1 km to 1 km, mm, including values near whole steps. */
+const lengthMm = fc.oneof(
+  fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+  fc.integer({ min: -64000, max: 64000 }).map((n) => (n / 32) * MM_PER_INCH),
+  fc.integer({ min: -64000, max: 64000 }).map((n) => ((n + 0.5) / 16) * MM_PER_INCH),
+);
+const denominator = fc.constantFrom<8 | 16 | 32>(8, 16, 32);
+/** ft-in text: optional minus, optional feet, inches, reduced fraction. */
+const FT_IN = /^(-?)(?:(\d+)'-)?(?:(\d+)(?: (\d+)\/(\d+))?|(\d+)\/(\d+))"$/;
+
+describe('formatLength: round trips (fast-check)', () => {
+  it('ft-in reads back to the input rounded to 1/denominator inch', () => {
+    fc.assert(
+      fc.property(lengthMm, denominator, (mm, den) => {
+        const text = formatLength(mm, { format: 'ft-in', fraction: den });
+        const back = parseLength(text, { allowNegative: true });
+        const step = MM_PER_INCH / den;
+        const slack = 1e-9 * Math.max(1, Math.abs(mm));
+        expect(Math.abs(back - mm)).toBeLessThanOrEqual(step / 2 + slack);
+        const steps = back / step;
+        expect(Math.abs(steps - Math.round(steps))).toBeLessThan(1e-6);
+        expect(Math.abs(back - roundToFraction(mm, den))).toBeLessThanOrEqual(slack);
+        expect(formatLength(back, { format: 'ft-in', fraction: den })).toBe(text);
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  it('ft-in text is always normalised: inches under 12, proper reduced fractions, no -0', () => {
+    fc.assert(
+      fc.property(lengthMm, denominator, (mm, den) => {
+        const text = formatLength(mm, { format: 'ft-in', fraction: den });
+        const m = FT_IN.exec(text);
+        expect(m, text).not.toBeNull();
+        if (m === null) return;
+        const [, sign, feet, inches, num1, den1, num2, den2] = m;
+        const num = Number(num1 ?? num2 ?? 0);
+        const d = Number(den1 ?? den2 ?? 1);
+        if (feet !== undefined) {
+          expect(Number(feet)).toBeGreaterThan(0);
+          expect(inches, text).toBeDefined();
+        }
+        if (inches !== undefined) expect(Number(inches)).toBeLessThan(12);
+        if (num1 !== undefined || num2 !== undefined) {
+          expect(num).toBeGreaterThan(0);
+          expect(num).toBeLessThan(d);
+          expect(num % 2 === 1, `${text} reduced`).toBe(true);
+          expect(den % d).toBe(0);
+        }
+        if (sign === '-') expect(text).not.toBe(`-0"`);
+        expect(text).not.toMatch(/\b(\d+)\/\1\b/);
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  it('mm and in read back to the input rounded to their decimals', () => {
+    fc.assert(
+      fc.property(lengthMm, fc.constantFrom<'mm' | 'in'>('mm', 'in'), fc.integer({ min: 0, max: 4 }), (mm, format, decimals) => {
+        const text = formatLength(mm, { format, decimals });
+        const back = parseLength(text, { allowNegative: true, unit: format === 'in' ? 'mm' : 'in' });
+        const unitMm = format === 'in' ? MM_PER_INCH : 1;
+        const step = unitMm * 10 ** -decimals;
+        const slack = 1e-9 * Math.max(1, Math.abs(mm));
+        expect(Math.abs(back - mm)).toBeLessThanOrEqual(step / 2 + slack);
+        const steps = back / step;
+        expect(Math.abs(steps - Math.round(steps))).toBeLessThan(1e-6);
+        expect(formatLength(back, { format, decimals })).toBe(text);
+      }),
+      { numRuns: 3000 },
+    );
+  });
+});

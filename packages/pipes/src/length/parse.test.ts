@@ -1,0 +1,176 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { GirthError } from '../errors.js';
+import { expectClose } from '../internal/test-support/expect-close.js';
+import { parseLength } from './parse.js';
+import { MM_PER_FOOT, MM_PER_INCH, lengthToMm, mmToLength } from './units.js';
+
+/** Floating-point slack for exact conversions, mm. */
+const EPS_MM = 1e-9;
+
+/** Runs `fn` and returns the GirthError it throws (fails the test otherwise). */
+function girthErrorOf(fn: () => unknown): GirthError {
+  try {
+    fn();
+  } catch (e) {
+    if (e instanceof GirthError) return e;
+    throw new Error(`expected a GirthError, got ${String(e)}`);
+  }
+  throw new Error('expected a GirthError, nothing was thrown');
+}
+
+describe('unit constants', () => {
+  it('uses the exact international inch and foot', () => {
+    // 1 in = 25.4 mm exactly (international yard and pound agreement of 1959;
+    // NIST SP 811, Appendix B), recalled; 1 ft = 12 in = 304.8 mm.
+    expect(MM_PER_INCH).toBe(25.4);
+    expect(MM_PER_FOOT).toBe(304.8);
+    expectClose(lengthToMm(16, 'in'), 406.4, EPS_MM, '16 in');
+    expectClose(mmToLength(406.4, 'in'), 16, 1e-12, '406.4 mm');
+    expect(lengthToMm(406.4, 'mm')).toBe(406.4);
+  });
+});
+
+describe('parseLength: accepted forms', () => {
+  // Expected values are plain arithmetic on the exact inch (25.4 mm) and foot (304.8 mm).
+  const inch18_3_16 = 18.1875 * MM_PER_INCH; // 461.9625 mm
+  const cases: ReadonlyArray<readonly [string, number, 'mm' | 'in' | undefined]> = [
+    [`1'-6 3/16"`, inch18_3_16, undefined],
+    [`1' 6-3/16"`, inch18_3_16, undefined],
+    [`1'6 3/16"`, inch18_3_16, undefined],
+    [`1'-6-3/16"`, inch18_3_16, undefined],
+    [`1 ft 6 3/16 in`, inch18_3_16, undefined],
+    [`18 3/16`, inch18_3_16, 'in'],
+    [`18 3/16`, 18.1875, 'mm'],
+    [`18-3/16"`, inch18_3_16, undefined],
+    [`18.1875in`, inch18_3_16, undefined],
+    [`18.1875"`, inch18_3_16, undefined],
+    [`18.1875 inches`, inch18_3_16, undefined],
+    [`18.1875 IN`, inch18_3_16, undefined],
+    [`  18 3/16 " `, inch18_3_16, undefined],
+    [`3/4"`, 19.05, undefined],
+    [`462mm`, 462, 'in'],
+    [`462 MM`, 462, undefined],
+    [`46.2cm`, 462, 'in'],
+    [`0.462m`, 462, undefined],
+    [`0.462 metres`, 462, undefined],
+    [`2ft`, 609.6, undefined],
+    [`2 feet`, 609.6, undefined],
+    [`5'`, 1524, undefined],
+    [`5'-0"`, 1524, undefined],
+    [`1'6"`, 457.2, undefined],
+    [`1ft 6in`, 457.2, undefined],
+    [`.375`, 0.375, undefined],
+    [`.375`, 9.525, 'in'],
+    [`12`, 12, undefined],
+    [`12.`, 12, undefined],
+    [`+12mm`, 12, undefined],
+    [`0`, 0, 'in'],
+    [`6 in.`, 152.4, undefined],
+    [`6''`, 152.4, undefined],
+    // Typographic marks as pasted from documents.
+    [`1′–6 3⁄16″`, inch18_3_16, undefined],
+    [`1’-6 3/16”`, inch18_3_16, undefined],
+    [`6½"`, 6.5 * MM_PER_INCH, undefined],
+    [`½"`, 12.7, undefined],
+  ];
+  for (const [text, mm, unit] of cases) {
+    it(`reads ${JSON.stringify(text)}${unit ? ` in a ${unit} job` : ''}`, () => {
+      expectClose(parseLength(text, unit ? { unit } : {}), mm, EPS_MM, text);
+    });
+  }
+
+  it('reads numbers in the job unit', () => {
+    expectClose(parseLength(16, { unit: 'in' }), 406.4, EPS_MM, '16 in');
+    expect(parseLength(406.4)).toBe(406.4);
+    expect(parseLength(0)).toBe(0);
+  });
+
+  it('reads negative lengths only when allowed, and never returns -0', () => {
+    expectClose(parseLength('-2in', { allowNegative: true }), -50.8, EPS_MM, '-2in');
+    expectClose(parseLength(`-1'-6 3/16"`, { allowNegative: true }), -inch18_3_16, EPS_MM, 'negative ft-in');
+    expectClose(parseLength(-3, { allowNegative: true, unit: 'in' }), -76.2, EPS_MM, '-3 in');
+    expect(Object.is(parseLength('-0'), 0)).toBe(true);
+    expect(Object.is(parseLength(-0), 0)).toBe(true);
+  });
+
+  it('agrees on every way of writing the same feet-inch-sixteenths', () => {
+    fc.assert(
+      fc.property(fc.nat(40), fc.nat(11), fc.nat(15), (feet, inches, sixteenths) => {
+        const expected = ((feet * 12 + inches) * 16 + sixteenths) / 16 * MM_PER_INCH;
+        const frac = sixteenths === 0 ? '' : ` ${sixteenths}/16`;
+        const forms = [
+          `${feet}'-${inches}${frac}"`,
+          `${feet}' ${inches}${frac.replace(' ', '-')}"`,
+          `${feet}ft ${inches}${frac} in`,
+          `${feet * 12 + inches}${frac}"`,
+          `${(feet * 12 + inches + sixteenths / 16).toString()}in`,
+        ];
+        for (const form of forms) expectClose(parseLength(form), expected, 1e-9 * Math.max(1, expected), form);
+        expectClose(parseLength(`${feet * 12 + inches}${frac}`, { unit: 'in' }), expected, 1e-9 * Math.max(1, expected), 'bare');
+      }),
+    );
+  });
+});
+
+describe('parseLength: bad input gets a typed error', () => {
+  const cases: ReadonlyArray<readonly [unknown, string]> = [
+    ['', 'EMPTY_INPUT'],
+    ['   ', 'EMPTY_INPUT'],
+    ['abc', 'BAD_LENGTH'],
+    ['in 12', 'BAD_LENGTH'],
+    ['--5', 'BAD_LENGTH'],
+    ['12 x 5', 'BAD_LENGTH'],
+    [`6" 3/16`, 'BAD_LENGTH'],
+    [`1'-6mm`, 'BAD_LENGTH'],
+    [`1' six`, 'BAD_LENGTH'],
+    ['12 in 5', 'BAD_LENGTH'],
+    ['18.5 1/4', 'BAD_LENGTH'],
+    ['12 inn', 'UNKNOWN_UNIT'],
+    ['5 mmm', 'UNKNOWN_UNIT'],
+    ['5 yd', 'UNKNOWN_UNIT'],
+    ['1/0', 'DIVIDE_BY_ZERO'],
+    [`1'-6 3/0"`, 'DIVIDE_BY_ZERO'],
+    ['-5mm', 'NEGATIVE'],
+    [-5, 'NEGATIVE'],
+    [Number.NaN, 'NOT_A_NUMBER'],
+    [Number.POSITIVE_INFINITY, 'NOT_FINITE'],
+    ['9'.repeat(400), 'NOT_FINITE'],
+    [null, 'BAD_LENGTH'],
+  ];
+  for (const [input, code] of cases) {
+    it(`refuses ${JSON.stringify(input) ?? String(input)} with ${code}`, () => {
+      const e = girthErrorOf(() => parseLength(input as string));
+      expect(e.code).toBe(code);
+      expect(e.field).toBe('length');
+      expect(e.message.startsWith('length:')).toBe(true);
+    });
+  }
+
+  it('names the caller’s field and the accepted units', () => {
+    const e = girthErrorOf(() => parseLength('12 inn', { field: 'offset' }));
+    expect(e.field).toBe('offset');
+    expect(e.message).toMatch(/did you mean in\?/);
+    expect(e.message).toMatch(/mm, cm, m, in/);
+    expect(e.value).toBe('12 inn');
+    expect(girthErrorOf(() => parseLength('5 mmm')).message).toMatch(/did you mean mm\?/);
+  });
+
+  it('quotes accepted forms when it cannot read the text', () => {
+    expect(girthErrorOf(() => parseLength('abc')).message).toMatch(/1'-6 3\/16"/);
+  });
+
+  it('never returns NaN or an infinite value for any text', () => {
+    fc.assert(
+      fc.property(fc.string({ maxLength: 24 }), (text) => {
+        try {
+          const mm = parseLength(text, { allowNegative: true });
+          expect(Number.isFinite(mm)).toBe(true);
+        } catch (e) {
+          expect(e).toBeInstanceOf(GirthError);
+        }
+      }),
+      { numRuns: 2000 },
+    );
+  });
+});

@@ -1,0 +1,53 @@
+/**
+ * Length units: the unit a job is written in, the styles lengths are printed
+ * in, and exact conversions. Girth computes in millimetres only; these are the
+ * edges where other units come in and go out.
+ */
+
+/** A job's unit: every bare number in the job (no unit mark) is read in it. */
+export type LengthUnit = 'mm' | 'in';
+
+/**
+ * How a length is written out: decimal millimetres, decimal inches, or
+ * feet-inch-fractions (`1'-6 3/16"`).
+ */
+export type LengthFormat = 'mm' | 'in' | 'ft-in';
+
+/** Every unit a length may be written in by hand: `mm`, `cm`, `m`, `in` (`"`), `ft` (`'`). */
+export type WrittenLengthUnit = 'mm' | 'cm' | 'm' | 'in' | 'ft';
+
+/** Millimetres in one inch, exactly (international inch of 1959). */
+export const MM_PER_INCH = 25.4;
+
+/** Inches in one foot. */
+export const INCHES_PER_FOOT = 12;
+
+/** Millimetres in one foot, exactly (12 x 25.4). */
+export const MM_PER_FOOT = 304.8;
+
+/** Millimetres in one of each written unit. */
+export const MM_PER_WRITTEN_UNIT: Readonly<Record<WrittenLengthUnit, number>> = {
+  mm: 1,
+  cm: 10,
+  m: 1000,
+  in: MM_PER_INCH,
+  ft: MM_PER_FOOT,
+};
+
+/**
+ * A length given in `unit` converted to millimetres. No rounding.
+ * @param value the length in `unit`; any finite number.
+ * @example lengthToMm(16, 'in') // 406.4
+ */
+export function lengthToMm(value: number, unit: LengthUnit): number {
+  return unit === 'in' ? value * MM_PER_INCH : value;
+}
+
+/**
+ * A length in millimetres converted to `unit`. No rounding.
+ * @param mm the length in millimetres; any finite number.
+ * @example mmToLength(406.4, 'in') // 16
+ */
+export function mmToLength(mm: number, unit: LengthUnit): number {
+  return unit === 'in' ? mm / MM_PER_INCH : mm;
+}
