@@ -1,0 +1,66 @@
+import { describe, expect, test } from 'vitest';
+import { layoutConcentricCone, layoutEccentricCone, type Template } from '@girth/unroll';
+import { templateToSvg } from './template-to-svg.js';
+import { DEMO_JOB, DEMO_PIECE } from './test-support/fixtures.js';
+import { byId, elements, parseSvg, sheetSize, textOf } from './test-support/parse.js';
+import { readPath } from './test-support/path-geometry.js';
+import { resvgOf, strictParse } from './test-support/render.js';
+import { expectClose } from './test-support/expect-close.js';
+
+const IN = 25.4;
+
+/** Everything resvg draws lies inside the sheet less its margin (0.05 mm for resvg's approximate path boxes). */
+function expectInsideMargin(svg: string, marginMm: number): void {
+  const s = sheetSize(parseSvg(svg));
+  const k = s.unit === 'in' ? IN : 1;
+  const b = resvgOf(svg).getBBox();
+  expect(b).toBeDefined();
+  if (!b) return;
+  const m = marginMm / k;
+  const tol = 0.05 / k;
+  expect(b.x).toBeGreaterThanOrEqual(m - tol);
+  expect(b.y).toBeGreaterThanOrEqual(m - tol);
+  expect(b.x + b.width).toBeLessThanOrEqual(s.width - m + tol);
+  expect(b.y + b.height).toBeLessThanOrEqual(s.height - m + tol);
+}
+
+describe('templates made by @girth/unroll', () => {
+  test('concentric cone: the published worked example keeps its radii and sweep on the sheet', () => {
+    // REFERENCES.md; "Drawing Nets" (ceemrr.com, Geometry2/DrawingsNets6): an 8 in to 5 in cone
+    // 4 in long has pattern radii 11.39 and 7.12 in and a 126.4° sweep (thin sheet: thickness 0).
+    const layout = layoutConcentricCone({ largeDiameterMm: 8 * IN, smallDiameterMm: 5 * IN, lengthMm: 4 * IN, thicknessMm: 0 });
+    const template = layout.templates[0] as Template;
+    const svg = templateToSvg(template, { sheetUnits: 'in', job: DEMO_JOB, piece: DEMO_PIECE });
+    strictParse(svg);
+    const root = parseSvg(svg);
+    const arcPaths = elements(byId(root, 'cut'), 'path')
+      .map((p) => readPath(p.attributes.d ?? ''))
+      .filter((p) => p.arcs.length > 0);
+    expect(arcPaths).toHaveLength(2);
+    const radii = arcPaths.map((p) => p.arcs[0]?.r ?? NaN).sort((a, b) => a - b);
+    expectClose(radii[0] as number, 7.12, 0.005, 'inner radius, in');
+    expectClose(radii[1] as number, 11.39, 0.005, 'outer radius, in');
+    for (const p of arcPaths) expectClose(p.arcs.reduce((s, a) => s + Math.abs(a.sweepDeg), 0), 126.4, 0.05, 'sweep, degrees');
+    expect(byId(root, 'overlap').children).toEqual([]);
+    expect(textOf(byId(root, 'title-block'))).toContain(template.title);
+    expectInsideMargin(svg, 10);
+  });
+
+  test('concentric cone in 4 segments and an eccentric cone: every template draws inside its margin', () => {
+    const spec = { largeDiameterMm: 323.85, smallDiameterMm: 168.275, lengthMm: 356, thicknessMm: 6 };
+    const templates = [
+      ...layoutConcentricCone(spec, { segments: 4 }).templates,
+      ...layoutEccentricCone(spec).templates,
+    ];
+    expect(templates.length).toBeGreaterThanOrEqual(5);
+    for (const t of templates) {
+      for (const sheetUnits of ['mm', 'in'] as const) {
+        const svg = templateToSvg(t, { sheetUnits, marginMm: 5 });
+        expect(svg).not.toMatch(/NaN|Infinity/);
+        expectInsideMargin(svg, 5);
+        const stations = elements(byId(parseSvg(svg), 'stations'), 'text');
+        expect(stations).toHaveLength(t.stationLines.length);
+      }
+    }
+  });
+});
