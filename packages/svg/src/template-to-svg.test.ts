@@ -7,6 +7,7 @@ import { byId, elements, parseSvg, sheetSize, textOf } from './test-support/pars
 import { pathBounds, readPath, type ReadPath } from './test-support/path-geometry.js';
 import { expectClose } from './test-support/expect-close.js';
 import type { INode } from 'svgson';
+import type { StationLine } from '@girth/unroll';
 
 const IN = 25.4;
 const DEG = Math.PI / 180;
@@ -123,6 +124,14 @@ describe('templateToSvg: groups and what every sheet carries', () => {
     const numbers = elements(byId(root, 'stations'), 'text').map(textOf);
     expect(numbers).toEqual(wrap.stationLines.map((s) => String(s.n)));
     expect(elements(byId(root, 'labels'), 'text').map(textOf)).toEqual(['HEEL', 'TOE']);
+  });
+
+  test('station lines starting at the same point share one number', () => {
+    const [a, b, c] = wrap.stationLines as [StationLine, StationLine, StationLine];
+    const t = { ...wrap, stationLines: [{ ...a, n: 8 }, { ...b, n: 2, from: a.from }, c] };
+    const texts = elements(byId(parseSvg(templateToSvg(t)), 'stations'), 'text');
+    expect(texts.map(textOf)).toEqual(['2/8', String(c.n)]);
+    expect(texts[0]?.attributes['data-station']).toBe('2 8');
   });
 
   test('without job and piece the sheet leaves blanks to write on', () => {

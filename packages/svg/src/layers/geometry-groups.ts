@@ -10,6 +10,7 @@ import type { Frame } from '../internal/frame.js';
 import type { NumberWriter } from '../internal/numbers.js';
 import { partData, paperLinesData } from '../internal/path-data.js';
 import type { CentredText } from '../internal/text-box.js';
+import type { StationNumber } from './station-numbers.js';
 
 function strokeAttrs(w: NumberWriter, color: string, widthMm: number, dashMm?: readonly number[]) {
   return {
@@ -67,7 +68,7 @@ export function centredTextNode(t: CentredText, frame: Frame, w: NumberWriter, a
 /** Station lines in one path, and their numbers. */
 export function stationsGroup(
   template: Template,
-  numbers: readonly CentredText[],
+  numbers: readonly StationNumber[],
   frame: Frame,
   w: NumberWriter,
 ): INode {
@@ -83,9 +84,7 @@ export function stationsGroup(
     el(
       'g',
       { class: 'station-numbers', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle' },
-      numbers.map((t, i) =>
-        centredTextNode(t, frame, w, { 'data-station': String(template.stationLines[i]?.n ?? '') }),
-      ),
+      numbers.map((t) => centredTextNode(t, frame, w, { 'data-station': t.stations.join(' ') })),
     ),
   ]);
 }
