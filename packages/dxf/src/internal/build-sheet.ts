@@ -2,7 +2,7 @@
  * Template -> sheet: what goes on which layer, where the text sits, and the
  * conversion to the output unit. Pure; every number is checked on the way.
  */
-import { GirthError } from '@girth/pipes';
+import { GirthError, MM_PER_INCH } from '@girth/pipes';
 import type { Template } from '@girth/unroll';
 import { DXF_CAUTION } from '../caution.js';
 import { dxfSafeText } from '../dxf-text.js';
@@ -14,9 +14,6 @@ import type { ResolvedDxfOptions } from './options.js';
 import { scaleEntity } from './scale.js';
 import { wrapWords } from './wrap-words.js';
 import type { Sheet, SheetEntity } from './sheet.js';
-
-/** Millimetres in one inch, exactly (international inch, 1959). */
-const MM_PER_INCH = 25.4;
 
 /** Station numbers are this fraction of the title height. */
 const STATION_NUMBER_SCALE = 0.6;
