@@ -1,0 +1,85 @@
+import { describe, expect, it } from 'vitest';
+import { isGirthError } from '@girth/pipes';
+import type { LayoutResult } from '@girth/unroll';
+import { toResultJson } from './result-json.js';
+import { INCH, planeCutOrdinateMm, sampleResult } from './test-support/fixtures.js';
+
+describe('toResultJson', () => {
+  it('has exactly the contract keys of DESIGN.md', () => {
+    const json = toResultJson(sampleResult(), { units: 'in' });
+    expect(Object.keys(json)).toEqual(['kind', 'units', 'templates', 'warnings', 'pipes']);
+    expect(json.kind).toBe('branch');
+    expect(json.units).toBe('in');
+    expect(json.templates.map((t) => t.id)).toEqual(['plane-cut', 'header-hole']);
+    expect(Object.keys(json.templates[0]!)).toEqual(['id', 'title', 'stretchOut', 'stations']);
+    expect(Object.keys(json.templates[1]!)).toEqual(['id', 'title', 'stations']);
+    expect(Object.keys(json.templates[0]!.stations[0]!)).toEqual(['n', 'angleDeg', 'girth', 'cutback']);
+    expect(Object.keys(json.templates[1]!.stations[0]!)).toEqual(['n', 'angleDeg', 'girth', 'axial']);
+    expect(json.warnings).toEqual([{ code: 'SHALLOW_LATERAL', message: 'a made-up warning for the test', field: 'angleDeg' }]);
+    expect(Object.keys(json.pipes[0]!)).toEqual(['role', 'label', 'od', 'wall', 'id']);
+  });
+
+  it('converts mm to inches exactly (25.4 mm = 1 in) and removes float noise', () => {
+    const json = toResultJson(sampleResult(), { units: 'in' });
+    // 25.4 mm is exactly 1 in (international inch, 1959).
+    expect(json.templates[1]!.stations[0]!['axial']).toBe(1);
+    expect(json.templates[1]!.stations[1]!['axial']).toBe(-1);
+    // NPS 6 STD: OD 6.625, wall 0.280, ID 6.065 in (ASME B36.10M, recalled; ID = OD - 2 wall).
+    expect(json.pipes[0]).toEqual({ role: 'branch', label: 'NPS 6 STD', od: 6.625, wall: 0.28, id: 6.065 });
+    // Stretch-out pi x 6.625 in, and the toe ordinate D tan 22.5° (REFERENCES.md, miter), to 1e-6 in.
+    expect(Math.abs(json.templates[0]!.stretchOut! - Math.PI * 6.625)).toBeLessThanOrEqual(5e-7);
+    const toe = json.templates[0]!.stations[8]!;
+    expect(toe['angleDeg']).toBe(180);
+    expect(Math.abs(toe['cutback']! - 6.625 * Math.tan(Math.PI / 8))).toBeLessThanOrEqual(5e-7);
+    // Every number is a multiple of 1e-6 of the unit.
+    for (const s of json.templates[0]!.stations) for (const v of Object.values(s)) expect(Math.abs(v * 1e6 - Math.round(v * 1e6))).toBeLessThan(1e-6);
+  });
+
+  it('keeps millimetres in mm', () => {
+    const json = toResultJson(sampleResult(), { units: 'mm' });
+    expect(json.units).toBe('mm');
+    expect(json.pipes[0]!.od).toBe(168.275);
+    expect(Math.abs(json.templates[0]!.stations[4]!['cutback']! - planeCutOrdinateMm(6.625 * INCH, 22.5, 90))).toBeLessThanOrEqual(5e-7);
+  });
+
+  it('passes further result fields through only when asked, in their own units', () => {
+    expect(Object.keys(toResultJson(sampleResult(), { units: 'in' }))).not.toContain('pieces');
+    const json = toResultJson(sampleResult(), { units: 'in', extra: true });
+    expect(json['pieces']).toEqual([{ n: 1, lengthMm: 100, cutAngleDeg: 11.25 }]);
+    expect(json['note']).toBe('extra text');
+    expect(Object.keys(json).slice(0, 5)).toEqual(['kind', 'units', 'templates', 'warnings', 'pipes']);
+  });
+
+  it('serialises to JSON without loss (no NaN, no undefined)', () => {
+    const json = toResultJson(sampleResult(), { units: 'in', extra: true });
+    expect(JSON.parse(JSON.stringify(json))).toEqual(json);
+  });
+
+  it('refuses bad units, non-finite lengths and reserved column keys with typed errors', () => {
+    const base = sampleResult();
+    const wrap = base.templates[0]!;
+    const cases: Array<[() => unknown, string, string]> = [
+      [() => toResultJson(base, { units: 'ft' as never }), 'BAD_OPTION', 'options.units'],
+      [
+        () => toResultJson({ ...base, templates: [{ ...wrap, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: Number.NaN, cutback: 0 } }] }] }, { units: 'mm' }),
+        'NOT_A_NUMBER',
+        'templates[0].stations[0].lengthsMm.girth',
+      ],
+      [() => toResultJson({ ...base, pipes: [{ ...base.pipes[0]!, odMm: Infinity }] }, { units: 'in' }), 'NOT_FINITE', 'pipes[0].odMm'],
+      [() => toResultJson({ ...base, templates: [{ ...wrap, stationColumns: [{ key: 'n', heading: 'N' }] }] }, { units: 'in' }), 'BAD_JOB', 'templates[0].stationColumns'],
+      [() => toResultJson({ ...base, bad: [1, Number.NaN] } as LayoutResult, { units: 'in', extra: true }), 'NOT_A_NUMBER', 'bad[1]'],
+    ];
+    for (const [fn, code, field] of cases) {
+      let caught: unknown;
+      try {
+        fn();
+      } catch (e) {
+        caught = e;
+      }
+      expect(isGirthError(caught), String(caught)).toBe(true);
+      if (!isGirthError(caught)) continue;
+      expect(caught.code).toBe(code);
+      expect(caught.field).toBe(field);
+    }
+  });
+});

@@ -1,0 +1,137 @@
+/**
+ * A layout result as the JSON result contract of DESIGN.md.
+ */
+import { GirthError, MM_PER_INCH, requireFinite } from '@girth/pipes';
+import type { LayoutResult, PipeUsed, Template } from '@girth/unroll';
+import type { PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson, WarningJson } from './types.js';
+
+/**
+ * Contract numbers are rounded to this many decimals of their unit (1e-6 mm or
+ * 1e-6 in), only to remove float noise such as 69.70205999999999; no shop
+ * measurement comes near it.
+ */
+export const RESULT_DECIMALS = 6;
+
+/** Keys of a result that the contract itself writes; everything else is extra. */
+const CONTRACT_KEYS = new Set(['kind', 'units', 'templates', 'warnings', 'pipes']);
+/** Keys of a station that come before its columns. */
+const STATION_KEYS = new Set(['n', 'angleDeg']);
+
+const SCALE = 10 ** RESULT_DECIMALS;
+/** Rounds away float noise; never returns -0. */
+function denoise(v: number): number {
+  const r = Math.round(v * SCALE) / SCALE;
+  return r === 0 ? 0 : r;
+}
+
+function requireList(value: unknown, field: string): readonly unknown[] {
+  if (!Array.isArray(value)) throw new GirthError('BAD_JOB', field, `${field}: expected a list`, value);
+  return value;
+}
+
+function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: string) => number): TemplateJson {
+  const field = `templates[${i}]`;
+  const columns = requireList(t.stationColumns, `${field}.stationColumns`) as Template['stationColumns'];
+  for (const c of columns) {
+    if (STATION_KEYS.has(c.key)) {
+      throw new GirthError('BAD_JOB', `${field}.stationColumns`, `${field}.stationColumns: key '${c.key}' is reserved for the station itself`, c.key);
+    }
+  }
+  const stations = (requireList(t.stations, `${field}.stations`) as Template['stations']).map((s, k) => {
+    const sf = `${field}.stations[${k}]`;
+    const row: Record<string, number> = {
+      n: requireFinite(s.n, `${sf}.n`),
+      angleDeg: denoise(requireFinite(s.angleDeg, `${sf}.angleDeg`)),
+    };
+    for (const c of columns) row[c.key] = toUnit(s.lengthsMm?.[c.key], `${sf}.lengthsMm.${c.key}`);
+    return row as StationJson;
+  });
+  return {
+    id: String(t.id),
+    title: String(t.title ?? ''),
+    ...(t.stretchOutMm === undefined ? {} : { stretchOut: toUnit(t.stretchOutMm, `${field}.stretchOutMm`) }),
+    stations,
+  };
+}
+
+function pipeJson(p: PipeUsed, i: number, toUnit: (mm: unknown, field: string) => number): PipeJson {
+  const field = `pipes[${i}]`;
+  return {
+    role: String(p.role),
+    label: String(p.label),
+    od: toUnit(p.odMm, `${field}.odMm`),
+    wall: toUnit(p.wallMm, `${field}.wallMm`),
+    id: toUnit(p.idMm, `${field}.idMm`),
+  };
+}
+
+/** A deep plain-JSON copy of an extra field; refuses non-finite numbers. */
+function plainCopy(value: unknown, field: string): unknown {
+  if (typeof value === 'number') return requireFinite(value, field);
+  if (value === null || typeof value === 'string' || typeof value === 'boolean') return value;
+  if (Array.isArray(value)) return value.map((v, i) => plainCopy(v, `${field}[${i}]`));
+  if (typeof value === 'object') {
+    const out: Record<string, unknown> = {};
+    for (const [k, v] of Object.entries(value)) {
+      if (v !== undefined && typeof v !== 'function') out[k] = plainCopy(v, `${field}.${k}`);
+    }
+    return out;
+  }
+  return undefined; // functions, symbols, bigints, undefined: not JSON
+}
+
+/**
+ * The JSON result contract of a layout (DESIGN.md): `{ kind, units, templates:
+ * [{ id, title, stretchOut?, stations: [{ n, angleDeg, <each station column
+ * key>: number }] }], warnings, pipes: [{ role, label, od, wall, id }] }`.
+ *
+ * Lengths are converted from mm to `units` (inches by dividing by 25.4
+ * exactly) and rounded to {@link RESULT_DECIMALS} places of that unit only to
+ * remove float noise; angles stay in degrees. Key names are the contract's
+ * and are never renamed. With `extra: true`, the result's further fields (a
+ * miter's `pieces`, a cone's `pattern`, ...) are copied as plain JSON under
+ * their own names, in the units their names say (`lengthMm` stays mm).
+ * `JSON.stringify` of the value is the `--json` output.
+ *
+ * @param result a layout result from `@girth/unroll`.
+ * @param options `units` `'in' | 'mm'`; `extra` (default false).
+ * @throws GirthError `BAD_OPTION` for unknown units; `NOT_A_NUMBER` /
+ *   `NOT_FINITE` naming a missing or non-finite length, e.g.
+ *   `templates[0].stations[3].lengthsMm.cutback`; `BAD_JOB` for a station
+ *   column named `n` or `angleDeg`.
+ * @example
+ * ```ts
+ * const json = toResultJson(layoutBranch(spec), { units: 'in' });
+ * json.templates[0].stations[0].cutback // decimal inches
+ * ```
+ */
+export function toResultJson(result: LayoutResult, options: ResultJsonOptions): ResultJson {
+  if (options === null || typeof options !== 'object') {
+    throw new GirthError('BAD_OPTION', 'options', 'options: expected { units, extra? }', options);
+  }
+  const units = options.units;
+  if (units !== 'in' && units !== 'mm') {
+    throw new GirthError('BAD_OPTION', 'options.units', `options.units: must be 'in' or 'mm', got ${String(units)}`, units);
+  }
+  if (result === null || typeof result !== 'object') {
+    throw new GirthError('BAD_JOB', 'result', `result: expected a layout result, got ${String(result)}`, result);
+  }
+  const k = units === 'in' ? 1 / MM_PER_INCH : 1;
+  const toUnit = (mm: unknown, field: string): number => denoise(requireFinite(mm, field) * k);
+  const templates = (requireList(result.templates, 'templates') as LayoutResult['templates']).map((t, i) => templateJson(t, i, toUnit));
+  const pipes = (requireList(result.pipes ?? [], 'pipes') as LayoutResult['pipes']).map((p, i) => pipeJson(p, i, toUnit));
+  const warnings: WarningJson[] = (requireList(result.warnings ?? [], 'warnings') as LayoutResult['warnings']).map((w) => ({
+    code: String(w.code),
+    message: String(w.message),
+    ...(w.field === undefined ? {} : { field: String(w.field) }),
+  }));
+  const extra: Record<string, unknown> = {};
+  if (options.extra === true) {
+    for (const [key, value] of Object.entries(result)) {
+      if (CONTRACT_KEYS.has(key)) continue;
+      const copy = plainCopy(value, key);
+      if (copy !== undefined) extra[key] = copy;
+    }
+  }
+  return { kind: String(result.kind), units, templates, warnings, pipes, ...extra };
+}

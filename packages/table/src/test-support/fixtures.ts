@@ -1,0 +1,77 @@
+/**
+ * Test templates for the tables, built from published formulas (not from
+ * Girth's layout code):
+ *
+ * - planeCutWrap: ordinate of a plane cut (D/2) tan(c) (1 - cos phi) and
+ *   stretch-out pi x OD (REFERENCES.md, miter and girth); 16 stations of 22.5°
+ *   (common practice).
+ */
+import type { LayoutResult, StationRow, Template } from '@girth/unroll';
+
+/** Millimetres in one inch, exactly (international inch, 1959). */
+export const INCH = 25.4;
+
+/** Cutback of a plane cut at `cutAngleDeg` on a pipe of `odMm`, at station angle `phiDeg`. */
+export function planeCutOrdinateMm(odMm: number, cutAngleDeg: number, phiDeg: number): number {
+  return (odMm / 2) * Math.tan((cutAngleDeg * Math.PI) / 180) * (1 - Math.cos((phiDeg * Math.PI) / 180));
+}
+
+/** A wrap template of a plane cut with `stationCount` stations and nothing drawn but its cut. */
+export function planeCutWrap(odMm: number, cutAngleDeg: number, stationCount = 16): Template {
+  const stations: StationRow[] = [];
+  for (let n = 1; n <= stationCount; n++) {
+    const angleDeg = (360 * (n - 1)) / stationCount;
+    stations.push({
+      n,
+      angleDeg,
+      lengthsMm: { girth: (Math.PI * odMm * angleDeg) / 360, cutback: planeCutOrdinateMm(odMm, cutAngleDeg, angleDeg) },
+    });
+  }
+  return {
+    id: 'plane-cut',
+    kind: 'wrap',
+    title: `Plane cut ${cutAngleDeg}° on OD ${Number((odMm / INCH).toFixed(3))} in`,
+    notes: [],
+    stretchOutMm: Math.PI * odMm,
+    wrapOdMm: odMm,
+    cut: [],
+    stationLines: [],
+    marks: [],
+    labels: [],
+    stationColumns: [
+      { key: 'girth', heading: 'Girth' },
+      { key: 'cutback', heading: 'Cutback' },
+    ],
+    stations,
+  };
+}
+
+/** A two-template result (a wrap and a hole-like table) with pipes, a warning and extra fields. */
+export function sampleResult(): LayoutResult & { readonly pieces: unknown; readonly note: string } {
+  const od = 6.625 * INCH; // NPS 6, ASME B36.10M (recalled; REFERENCES.md)
+  const wall = 0.28 * INCH; // STD
+  const wrap = planeCutWrap(od, 22.5);
+  const { stretchOutMm: _wrapOnly, ...wrapBase } = wrap;
+  const hole: Template = {
+    ...wrapBase,
+    id: 'header-hole',
+    kind: 'hole',
+    title: 'Hole',
+    stationColumns: [
+      { key: 'girth', heading: 'Girth' },
+      { key: 'axial', heading: 'Axial' },
+    ],
+    stations: [
+      { n: 1, angleDeg: 0, lengthsMm: { girth: 0, axial: INCH } },
+      { n: 2, angleDeg: 180, lengthsMm: { girth: 0, axial: -INCH } },
+    ],
+  };
+  return {
+    kind: 'branch',
+    templates: [wrap, hole],
+    pipes: [{ role: 'branch', label: 'NPS 6 STD', odMm: od, wallMm: wall, idMm: od - 2 * wall }],
+    warnings: [{ code: 'SHALLOW_LATERAL', message: 'a made-up warning for the test', field: 'angleDeg' }],
+    pieces: [{ n: 1, lengthMm: 100, cutAngleDeg: 11.25 }],
+    note: 'extra text',
+  };
+}

@@ -1,0 +1,86 @@
+/**
+ * Options and shapes of the station tables and of the JSON result contract.
+ */
+
+/** How lengths are written in a station table: decimal mm, decimal inches, or feet-inch-fractions. */
+export type TableLengthFormat = 'ft-in' | 'in' | 'mm';
+
+/** Options of {@link formatStationTable} and {@link stationTableCsv}. */
+export interface StationTableOptions {
+  /** `'ft-in'` (`1'-6 3/16"`), `'in'` (`18.192"`) or `'mm'` (`462.1 mm`). */
+  readonly format: TableLengthFormat;
+  /** For `'ft-in'`: round to 1/8, 1/16 (default) or 1/32 inch. */
+  readonly fraction?: 8 | 16 | 32;
+  /** For `'in'` and `'mm'`: digits after the point, 0 to 6 (default 3 for in, 1 for mm). */
+  readonly decimals?: number;
+}
+
+/** Options of {@link formatStationTable} only. */
+export interface StationTableTextOptions extends StationTableOptions {
+  /** End the table with the one-line caution; default true. */
+  readonly caution?: boolean;
+}
+
+/** Unit of every contract length in a {@link ResultJson}: decimal inches or millimetres. */
+export type ResultUnits = 'in' | 'mm';
+
+/** Options of {@link toResultJson}. */
+export interface ResultJsonOptions {
+  /** Unit of the contract lengths. */
+  readonly units: ResultUnits;
+  /**
+   * Copy the result's own further fields (e.g. a miter's `pieces`, a cone's
+   * `pattern`) into the JSON unchanged; default false. They keep the units
+   * their names say (`lengthMm` stays mm), whatever `units` is.
+   */
+  readonly extra?: boolean;
+}
+
+/** One station of a template in the JSON contract: `n`, `angleDeg`, then one number per station column (`girth`, `cutback`, `axial`, ...). */
+export interface StationJson {
+  readonly n: number;
+  readonly angleDeg: number;
+  readonly [column: string]: number;
+}
+
+/** One template in the JSON contract. */
+export interface TemplateJson {
+  /** Contract id, e.g. `branch-cut`, `header-hole`. */
+  readonly id: string;
+  /** The template's one-line title. */
+  readonly title: string;
+  /** For wraps: developed length of the girth, in the result's unit. */
+  readonly stretchOut?: number;
+  readonly stations: readonly StationJson[];
+}
+
+/** A pipe as the joint used it, lengths in the result's unit. */
+export interface PipeJson {
+  readonly role: string;
+  readonly label: string;
+  readonly od: number;
+  readonly wall: number;
+  readonly id: number;
+}
+
+/** A warning as in the result. */
+export interface WarningJson {
+  readonly code: string;
+  readonly message: string;
+  readonly field?: string;
+}
+
+/**
+ * The JSON result contract (DESIGN.md, "The result contract"): the library's
+ * and the CLI's `--json` output. Key names are fixed; fields may be added,
+ * never renamed.
+ */
+export interface ResultJson {
+  readonly kind: string;
+  readonly units: ResultUnits;
+  readonly templates: readonly TemplateJson[];
+  readonly warnings: readonly WarningJson[];
+  readonly pipes: readonly PipeJson[];
+  /** Further fields of the result, present only with `extra: true`. */
+  readonly [extra: string]: unknown;
+}
