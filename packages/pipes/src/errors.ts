@@ -17,6 +17,7 @@ export type GirthErrorCode =
   | 'BAD_PIPE_NAME'
   | 'UNKNOWN_SIZE'
   | 'UNKNOWN_SCHEDULE'
+  | 'MISSING_SCHEDULE'
   | 'WALL_TOO_THICK'
   | 'BRANCH_TOO_LARGE'
   | 'OFFSET_MISSES'
