@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { maximizeOnInterval } from './golden-max.js';
-import { distanceToSegment } from './segment-distance.js';
 
 describe('maximizeOnInterval', () => {
   it('finds the vertex of a parabola (invariant: the peak of -(x-p)² is p)', () => {
@@ -16,13 +15,5 @@ describe('maximizeOnInterval', () => {
   it('finds a peak at an end of the interval', () => {
     const r = maximizeOnInterval((x) => x, 0, 1, 1e-12);
     expect(1 - r.x).toBeLessThan(1e-11);
-  });
-});
-
-describe('distanceToSegment', () => {
-  it('measures square to the segment inside it, and to the nearer end outside it', () => {
-    expect(distanceToSegment([1, 1], [0, 0], [2, 0])).toBe(1);
-    expect(distanceToSegment([5, 4], [0, 0], [2, 0])).toBe(5);
-    expect(distanceToSegment([3, 4], [0, 0], [0, 0])).toBe(5);
   });
 });

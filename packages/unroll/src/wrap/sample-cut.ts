@@ -12,16 +12,29 @@ import {
   type HostSurface,
 } from '@girth/geometry';
 import type { Point2 } from '../types.js';
-import { distanceToSegment } from '../internal/segment-distance.js';
+import { chordDeviationModel } from '../internal/chord-deviation.js';
 import { maximizeOnInterval } from '../internal/golden-max.js';
 
 const TWO_PI = 2 * Math.PI;
 
 /** Largest span between two sample points before adaptive refinement starts (7.5°), so no wave of the curve hides between the probe points. */
-const MAX_START_SPAN_RAD = TWO_PI / 48;
+const MAX_START_SPAN_RAD = TWO_PI / 24;
 
 /** Deepest halving of one span; 2^-40 of 7.5° is far below any shop measure, so this only stops runaway loops. */
 const MAX_HALVINGS = 40;
+
+/**
+ * Share of the chord tolerance the modelled deviation of a chord may reach
+ * for the chord to be accepted; the rest covers the model's own error.
+ */
+const CHORD_SHARE = 0.9;
+
+/**
+ * Share of the chord tolerance within which the model must put both half
+ * chords to accept them unprobed (the model is extrapolated there, so the
+ * margin is wider).
+ */
+const HALF_CHORD_SHARE = 0.5;
 
 /** Station angles closer than this are the same point (radians; ~1e-10 mm on a 1 m pipe). */
 const SAME_PHI_EPS_RAD = 1e-12;
@@ -137,10 +150,20 @@ export function sampleCut(bundle: GeneratorBundle, host: HostSurface, options: S
 function refineSpan(a: Sample, b: Sample, at: (phiRad: number) => Sample, tol: number, out: Sample[]): void {
   const pa = a.hit.phiRad;
   const pb = b.hit.phiRad;
-  const m = at((pa + pb) / 2);
-  refineWithProbes(a, at((3 * pa + pb) / 4), m, at((pa + 3 * pb) / 4), b, at, tol, out, 0);
+  refineWithProbes(a, at((3 * pa + pb) / 4), at((pa + pb) / 2), at((pa + 3 * pb) / 4), b, at, tol, out, 0);
 }
 
+/**
+ * One span with its quarter probes. The deviation of the curve from the
+ * chord a–b, as a function of the span's fraction s, is zero at both ends and
+ * known at s = 1/4, 1/2, 3/4; the quartic through these five values models
+ * it between the probes. The chord is accepted when the model stays within
+ * CHORD_SHARE of the tolerance (and so does the end check, which catches a
+ * sharp turn next to an end that the model cannot show); the two half chords
+ * through the midpoint are accepted without new probes when the model puts
+ * both within HALF_CHORD_SHARE and the end check within the tolerance;
+ * otherwise both halves are probed in turn.
+ */
 function refineWithProbes(
   a: Sample,
   q1: Sample,
@@ -152,12 +175,13 @@ function refineWithProbes(
   out: Sample[],
   depth: number,
 ): void {
-  const within =
-    distanceToSegment(q1.flat, a.flat, b.flat) <= tol &&
-    distanceToSegment(m.flat, a.flat, b.flat) <= tol &&
-    distanceToSegment(q3.flat, a.flat, b.flat) <= tol;
-  if (within || depth >= MAX_HALVINGS) {
+  const dev = chordDeviationModel(a.flat, q1.flat, m.flat, q3.flat, b.flat);
+  if (dev.whole <= CHORD_SHARE * tol || depth >= MAX_HALVINGS) {
     out.push(b);
+    return;
+  }
+  if (dev.halves <= HALF_CHORD_SHARE * tol && dev.endTrend <= tol) {
+    out.push(m, b);
     return;
   }
   const pa = a.hit.phiRad;

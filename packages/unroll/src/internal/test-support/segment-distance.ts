@@ -1,7 +1,7 @@
 /**
  * Distance on the flat from a point to a straight segment, in mm.
  */
-import type { Point2 } from '../types.js';
+import type { Point2 } from '../../types.js';
 
 /**
  * The shortest distance from `p` to the segment `a`–`b` (mm). A degenerate
