@@ -17,10 +17,10 @@ import { maximizeOnInterval } from '../internal/golden-max.js';
 
 const TWO_PI = 2 * Math.PI;
 
-/** Largest span between two sample points before adaptive refinement starts (7.5°), so no wave of the curve hides between the probe points. */
+/** Largest span between two sample points before adaptive refinement starts (15°): the cut curves of pipe joints have no wave this short outside near-grazes, which the end check of each span catches. */
 const MAX_START_SPAN_RAD = TWO_PI / 24;
 
-/** Deepest halving of one span; 2^-40 of 7.5° is far below any shop measure, so this only stops runaway loops. */
+/** Deepest halving of one span; 2^-40 of 15° is far below any shop measure, so this only stops runaway loops. */
 const MAX_HALVINGS = 40;
 
 /**
