@@ -2,3 +2,4 @@ export * from './types.js';
 export * from './wrap/sample-cut.js';
 export * from './wrap/develop-wrap.js';
 export * from './cone/index.js';
+export * from './branch/index.js';

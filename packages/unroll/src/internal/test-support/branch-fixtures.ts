@@ -44,3 +44,15 @@ export function branchAxialClosedForm(R: number, r: number, angleDeg: number, of
   const z = Math.sqrt(Math.max(0, R * R - y * y));
   return (r * Math.cos(phi) * Math.cos(a) - z) / Math.sin(a);
 }
+
+/**
+ * The hole edge on the header OD (radius `R`) at station `phi`, developed,
+ * in closed form: y = e + r sin phi, z = sqrt(R² − y²); girth = R · atan2(y, z);
+ * axial x = (z cos A − r cos phi) / sin A (the generator point where it meets the cylinder).
+ */
+export function holeClosedForm(R: number, r: number, angleDeg: number, offsetMm: number, phi: number): readonly [number, number] {
+  const a = (angleDeg * Math.PI) / 180;
+  const y = offsetMm + r * Math.sin(phi);
+  const z = Math.sqrt(Math.max(0, R * R - y * y));
+  return [R * Math.atan2(y, z), (z * Math.cos(a) - r * Math.cos(phi)) / Math.sin(a)];
+}
