@@ -17,6 +17,8 @@
  */
 import Module from 'manifold-3d';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { layoutBranch } from '@girth/unroll';
+import { cutPolylinePoints, templateById } from '../support/template-access.js';
 import {
   branchFrame,
   branchPhiOfPoint,
@@ -138,6 +140,41 @@ describe(`header hole against a manifold-3d boolean of two cylinders (n = ${SEGM
         const nearest = Math.min(...seam.map((p) => Math.hypot(p[0] - c[0], p[1] - c[1], p[2] - c[2])));
         expect(nearest, `exact curve at ${i / 2}° has no seam vertex within ${facetMm + tolMm} mm`).toBeLessThanOrEqual(facetMm + tolMm);
       }
+    });
+  }
+});
+
+/** Distance in the flat from point `p` to a closed polyline. */
+function distanceToClosedPolyline2(p: readonly [number, number], pts: readonly (readonly [number, number])[]): number {
+  let best = Number.POSITIVE_INFINITY;
+  for (let i = 0; i < pts.length; i++) {
+    const a = pts[i]!;
+    const b = pts[(i + 1) % pts.length]!;
+    const dx = b[0] - a[0];
+    const dy = b[1] - a[1];
+    const len2 = dx * dx + dy * dy;
+    const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / len2));
+    best = Math.min(best, Math.hypot(p[0] - a[0] - t * dx, p[1] - a[1] - t * dy));
+  }
+  return best;
+}
+
+describe(`the library's header-hole contour against the manifold-3d seam (n = ${SEGMENTS})`, () => {
+  const chordToleranceMm = 0.001;
+  for (const { name, spec } of cases) {
+    it(`${name}: every seam vertex, developed onto the header OD, lies within the mesh bound plus the chord tolerance of the library's hole contour`, () => {
+      const { seam, sagHMm, sagBMm } = meshSeam(spec, SEGMENTS);
+      // The development (girth, axial) is an isometry of the header surface; a seam vertex up to sagH inside
+      // the surface develops at most that 3D distance away, so the 3D bound carries over to the flat.
+      const tolMm = (sagHMm + sagBMm) / minCrossingSine(spec) + 1e-3 + chordToleranceMm;
+      const R = branchRadii(spec).headerOuterRadiusMm;
+      const hole = templateById(layoutBranch({ ...spec, fit: 'set-on' }, { chordToleranceMm }), 'header-hole');
+      const contour = cutPolylinePoints(hole);
+      const distances = seam.map((p) => distanceToClosedPolyline2([R * Math.atan2(p[1], p[2]), p[0]], contour));
+      const worst = Math.max(...distances);
+      console.log(`${name}: library hole contour (${contour.length} points) vs seam: max ${worst.toExponential(3)} mm, bound ${tolMm.toExponential(3)} mm`);
+      const firstBad = distances.findIndex((d) => !(d <= tolMm));
+      expect(firstBad, `seam vertex ${firstBad} at ${String(seam[firstBad])} is ${distances[firstBad]} mm from the library's hole contour (tolerance ${tolMm} mm)`).toBe(-1);
     });
   }
 });
