@@ -2,7 +2,7 @@
  * The words on branch templates: titles, the notes of the title block, and
  * the caution every printed template carries.
  */
-import type { BranchGeometry, ResolvedBranchSpec } from '@girth/geometry';
+import { FIT_CONTACT, type BranchGeometry, type ResolvedBranchSpec } from '@girth/geometry';
 import { formatAngleDeg, formatLengthMm } from '../internal/format-length.js';
 
 /** The caution printed on every branch template (hot work on pressure piping). */
@@ -16,13 +16,21 @@ export const BRANCH_CAUTION =
  * @example describeBranchJoint(solveBranch(spec).spec) // "NPS 6 STD on NPS 12 STD, 45°, set-on"
  */
 export function describeBranchJoint(s: ResolvedBranchSpec): string {
-  const parts = [`${s.branch.label} on ${s.header.label}`, formatAngleDeg(s.angleDeg), s.fit];
+  const parts = [`${s.branch.label} on ${s.header.label}`, formatAngleDeg(s.angleDeg), fitWords(s)];
   if (s.offsetMm !== 0) parts.push(`offset ${formatLengthMm(s.offsetMm)}`);
   if (s.gapMm > 0) parts.push(`root gap ${formatLengthMm(s.gapMm)}`);
   return parts.join(', ');
 }
 
 const FACE_WORD = { inside: 'ID', outside: 'OD' } as const;
+
+/** The fit's name, or the surfaces that meet when `contact` overrides the fit. */
+function fitWords(s: ResolvedBranchSpec): string {
+  const usual = FIT_CONTACT[s.fit];
+  return usual.branch === s.contact.branch && usual.header === s.contact.header
+    ? s.fit
+    : `branch ${FACE_WORD[s.contact.branch]} on header ${FACE_WORD[s.contact.header]}`;
+}
 
 /** Notes shared by both templates: the pipes, the joint, warnings, the caution. */
 function jointNotes(g: BranchGeometry): string[] {
@@ -34,7 +42,7 @@ function jointNotes(g: BranchGeometry): string[] {
   return [
     pipe('Header', s.header),
     pipe('Branch', s.branch),
-    `Angle ${formatAngleDeg(s.angleDeg)} between branch and header axes; ${offset}; ${s.fit}: branch ${FACE_WORD[s.contact.branch]} meets header ${FACE_WORD[s.contact.header]}; root gap ${formatLengthMm(s.gapMm)}.`,
+    `Angle ${formatAngleDeg(s.angleDeg)} between branch and header axes; ${offset}; ${fitWords(s)}: branch ${FACE_WORD[s.contact.branch]} meets header ${FACE_WORD[s.contact.header]}; root gap ${formatLengthMm(s.gapMm)}.`,
   ];
 }
 

@@ -217,6 +217,8 @@ describe('layoutBranch', () => {
     expect(cut.stationColumns.map((c) => c.key)).toEqual(['girth', 'cutback']);
     expect(hole.stationColumns.map((c) => c.key)).toEqual(['girth', 'axial']);
     expect(hole.labels.map((l) => l.text)).toEqual(['HEEL', 'TOE', 'TOP LINE']);
+    const override = layoutBranch({ header: NPS12, branch: NPS6, contact: { branch: 'outside', header: 'outside' } });
+    expect(override.templates[0].title).toBe('Branch cut: NPS 6 STD on NPS 12 STD, 90°, branch OD on header OD');
   });
 
   it('marks the hole centre where the branch axis pierces the header OD', () => {
