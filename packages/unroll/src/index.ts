@@ -3,3 +3,5 @@ export * from './wrap/sample-cut.js';
 export * from './wrap/develop-wrap.js';
 export * from './cone/index.js';
 export * from './branch/index.js';
+export * from './plane-cut/index.js';
+export * from './miter/index.js';
