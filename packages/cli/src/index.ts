@@ -1,1 +1,9 @@
-export {};
+export * from './run-cli.js';
+export * from './io.js';
+export * from './write-files.js';
+export * from './outputs.js';
+export * from './report.js';
+export * from './joints/types.js';
+export * from './joints/layout-joint.js';
+export * from './job/schema.js';
+export * from './job/run-job.js';

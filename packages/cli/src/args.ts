@@ -1,0 +1,101 @@
+/**
+ * Command-line option parsing on Node's own `util.parseArgs`, with errors that
+ * name the option a fitter typed wrong.
+ */
+import { parseArgs, type ParseArgsConfig } from 'node:util';
+import { GirthError } from '@girth/pipes';
+
+/** Option definitions as `util.parseArgs` takes them. */
+export type OptionSpec = NonNullable<ParseArgsConfig['options']>;
+
+/** Parsed options (strings and booleans) and positional arguments. */
+export interface ParsedArgs {
+  readonly values: Readonly<Record<string, string | boolean | undefined>>;
+  readonly positionals: readonly string[];
+}
+
+/**
+ * Parses `argv` strictly against `options`.
+ * @throws GirthError `BAD_OPTION` naming an unknown option, a missing value, or
+ *   an unexpected argument.
+ * @example parseOptions(['--angle', '45'], { angle: { type: 'string' } }).values.angle // '45'
+ */
+export function parseOptions(argv: readonly string[], options: OptionSpec, allowPositionals = false): ParsedArgs {
+  try {
+    const { values, positionals } = parseArgs({ args: [...argv], options, allowPositionals, strict: true });
+    return { values: values as ParsedArgs['values'], positionals };
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    const option = /'(-{1,2}[^' ]+)/.exec(message)?.[1] ?? 'arguments';
+    throw new GirthError('BAD_OPTION', option, `${option}: ${firstSentence(message)}`, option);
+  }
+}
+
+function firstSentence(message: string): string {
+  const cut = message.indexOf('. ');
+  return cut > 0 ? message.slice(0, cut) : message;
+}
+
+/** The string value of an option, or `undefined` when absent. */
+export function stringOption(args: ParsedArgs, name: string): string | undefined {
+  const v = args.values[name];
+  return typeof v === 'string' ? v : undefined;
+}
+
+/**
+ * The value of a required string option.
+ * @throws GirthError `BAD_OPTION` when it is missing.
+ */
+export function requireOption(args: ParsedArgs, name: string, example: string): string {
+  const v = stringOption(args, name);
+  if (v === undefined || v.trim() === '') {
+    throw new GirthError('BAD_OPTION', `--${name}`, `--${name}: required, e.g. --${name} ${example}`);
+  }
+  return v;
+}
+
+/**
+ * A number option (plain decimal), or `fallback` when absent.
+ * @throws GirthError `NOT_A_NUMBER` naming the option when it is not a number.
+ */
+export function numberOption(args: ParsedArgs, name: string, fallback?: number): number | undefined {
+  const v = stringOption(args, name);
+  if (v === undefined) return fallback;
+  const n = Number(v.trim());
+  if (v.trim() === '' || !Number.isFinite(n)) {
+    throw new GirthError('NOT_A_NUMBER', `--${name}`, `--${name}: expected a number, got "${v}"`, v);
+  }
+  return n;
+}
+
+/**
+ * One of the allowed words, or `fallback` when absent.
+ * @throws GirthError `BAD_OPTION` listing the allowed words.
+ */
+export function choiceOption<const T extends string>(args: ParsedArgs, name: string, allowed: readonly T[], fallback: T): T {
+  const v = stringOption(args, name);
+  if (v === undefined) return fallback;
+  const found = allowed.find((a) => a === v.trim().toLowerCase());
+  if (found === undefined) {
+    throw new GirthError('BAD_OPTION', `--${name}`, `--${name}: must be one of ${allowed.join(', ')}; got "${v}"`, v);
+  }
+  return found;
+}
+
+/**
+ * One of the allowed words, or `undefined` when absent.
+ * @throws GirthError `BAD_OPTION` listing the allowed words.
+ */
+export function optionalChoice<const T extends string>(args: ParsedArgs, name: string, allowed: readonly T[]): T | undefined {
+  return stringOption(args, name) === undefined ? undefined : choiceOption<T>(args, name, allowed, allowed[0]!);
+}
+
+/**
+ * The value of a required number option.
+ * @throws GirthError `BAD_OPTION` when missing, `NOT_A_NUMBER` when not a number.
+ */
+export function requireNumberOption(args: ParsedArgs, name: string, example: string): number {
+  const v = numberOption(args, name);
+  if (v === undefined) throw new GirthError('BAD_OPTION', `--${name}`, `--${name}: required, e.g. --${name} ${example}`);
+  return v;
+}

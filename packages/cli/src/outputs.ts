@@ -1,0 +1,66 @@
+/**
+ * What a layout becomes on disk: SVG and DXF per template, CSV of the station
+ * tables, all planned in memory before anything is written.
+ */
+import { basename, dirname, extname, join } from 'node:path';
+import { templateToDxf, type DxfVersion } from '@girth/dxf';
+import type { LengthUnit } from '@girth/pipes';
+import { templateToSvg } from '@girth/svg';
+import { stationTableCsv, type TableLengthFormat } from '@girth/table';
+import type { LayoutResult, Template } from '@girth/unroll';
+import type { PlannedFile } from './write-files.js';
+
+/** Where to write each kind of output; absent kinds are not written. */
+export interface OutputRequest {
+  readonly svg?: string;
+  readonly dxf?: string;
+  readonly csv?: string;
+}
+
+/** How outputs look: unit, table style, DXF version, labels. */
+export interface OutputStyle {
+  readonly units: LengthUnit;
+  readonly tableFormat: TableLengthFormat;
+  readonly fraction: 8 | 16 | 32;
+  readonly dxfVersion: DxfVersion;
+  readonly job?: string;
+  readonly piece?: string;
+}
+
+/**
+ * The path of one template's file. A layout with one template writes exactly
+ * the path given; with several, the template id goes before the extension
+ * (`tee.svg` → `tee.branch-cut.svg`, `tee.header-hole.svg`).
+ */
+export function templatePath(path: string, template: Template, templateCount: number): string {
+  if (templateCount <= 1) return path;
+  const ext = extname(path);
+  return join(dirname(path), `${basename(path, ext)}.${template.id}${ext}`);
+}
+
+/**
+ * Every file a layout produces for the request, content included.
+ * @example planOutputs(result, { svg: 'tee.svg' }, style).map((f) => f.path)
+ */
+export function planOutputs(result: LayoutResult, request: OutputRequest, style: OutputStyle): readonly PlannedFile[] {
+  const files: PlannedFile[] = [];
+  const count = result.templates.length;
+  const labels = { ...(style.job !== undefined ? { job: style.job } : {}), ...(style.piece !== undefined ? { piece: style.piece } : {}) };
+  for (const template of result.templates) {
+    if (request.svg !== undefined) {
+      files.push({ path: templatePath(request.svg, template, count), content: templateToSvg(template, { sheetUnits: style.units, ...labels }) });
+    }
+    if (request.dxf !== undefined) {
+      files.push({
+        path: templatePath(request.dxf, template, count),
+        content: templateToDxf(template, { units: style.units, version: style.dxfVersion, ...labels }),
+      });
+    }
+  }
+  if (request.csv !== undefined) {
+    for (const template of result.templates) {
+      files.push({ path: templatePath(request.csv, template, count), content: stationTableCsv(template, { format: style.tableFormat, fraction: style.fraction }) });
+    }
+  }
+  return files;
+}

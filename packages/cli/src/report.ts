@@ -1,0 +1,105 @@
+/**
+ * What the command prints: the ordinate tables and each joint's own figures
+ * (miter cut list, cone pattern), or the JSON result contract.
+ */
+import { formatLength, MM_PER_INCH, type LengthUnit } from '@girth/pipes';
+import { formatStationTable, TABLE_CAUTION, toResultJson, type ResultJson, type TableLengthFormat } from '@girth/table';
+import type { ConeLayout, LayoutResult, MiterLayout } from '@girth/unroll';
+
+/** How lengths are printed. */
+export interface ReportStyle {
+  readonly units: LengthUnit;
+  readonly tableFormat: TableLengthFormat;
+  readonly fraction: 8 | 16 | 32;
+}
+
+/** A length as the report prints it. */
+export function reportLength(mm: number, style: ReportStyle): string {
+  return formatLength(mm, { format: style.tableFormat, fraction: style.fraction });
+}
+
+function isMiter(result: LayoutResult): result is MiterLayout {
+  return result.kind === 'miter';
+}
+
+function isCone(result: LayoutResult): result is ConeLayout {
+  return result.kind === 'reducer';
+}
+
+/**
+ * The printed report of one layout: pipes, warnings, every station table and
+ * the joint's own figures. Ends without the caution (the caller prints it once).
+ */
+export function layoutReportText(result: LayoutResult, style: ReportStyle, heading?: string): string {
+  const L = (mm: number): string => reportLength(mm, style);
+  const out: string[] = [];
+  if (heading !== undefined) out.push(`== ${heading} ==`, '');
+  for (const p of result.pipes) out.push(`${p.role}: ${p.label}  (OD ${L(p.odMm)}, wall ${L(p.wallMm)}, ID ${L(p.idMm)})`);
+  for (const w of result.warnings) out.push(`WARNING ${w.code}: ${w.message}`);
+  if (isMiter(result)) out.push('', ...miterLines(result, L));
+  if (isCone(result) && result.form === 'concentric') {
+    const p = result.pattern;
+    out.push(
+      '',
+      `Pattern: outer radius ${L(p.outerRadius)}, inner radius ${L(p.innerRadius)}, sweep ${p.sweepDeg.toFixed(2)} deg, slant height ${L(p.slantHeight)}`,
+    );
+  }
+  for (const template of result.templates) out.push('', formatStationTable(template, { format: style.tableFormat, fraction: style.fraction, caution: false }).trimEnd());
+  return out.join('\n') + '\n';
+}
+
+function miterLines(result: MiterLayout, L: (mm: number) => string): string[] {
+  const lines = [
+    `Miter: ${result.bendDeg} deg bend, ${result.welds} welds, ${result.pieceCount} pieces, cut angle ${result.cutAngleDeg.toFixed(3)} deg, centreline radius ${L(result.radiusMm)}`,
+    '',
+    'Piece            Count  Centre        Back          Throat',
+  ];
+  for (const p of result.pieces) {
+    lines.push(`${p.label.padEnd(16)} ${String(p.count).padStart(5)}  ${L(p.center).padEnd(12)}  ${L(p.back).padEnd(12)}  ${L(p.throat)}`);
+  }
+  lines.push('', `Stock: ${L(result.stockLengthMm)} of straight pipe; cut in this order, turning the pipe 180 deg before each next cut:`);
+  for (const c of result.stock.cuts) {
+    lines.push(`  cut ${c.n}: centreline at ${L(c.centerAtMm)} from the stock end, long side at ${c.longSideDeg} deg`);
+  }
+  return lines;
+}
+
+/** The caution printed once at the end of every report. */
+export const REPORT_CAUTION = TABLE_CAUTION;
+
+/**
+ * The JSON result contract (DESIGN.md) with each joint's own figures in the
+ * job's unit: miter `pieces`, `cutAngleDeg`, `stockLength`; cone `pattern`.
+ */
+export function layoutJson(result: LayoutResult, units: LengthUnit): ResultJson {
+  const base = toResultJson(result, { units });
+  const k = units === 'in' ? 1 / MM_PER_INCH : 1;
+  const len = (mm: number): number => Math.round(mm * k * 1e6) / 1e6;
+  if (isMiter(result)) {
+    return {
+      ...base,
+      bendDeg: result.bendDeg,
+      welds: result.welds,
+      cutAngleDeg: result.cutAngleDeg,
+      radius: len(result.radiusMm),
+      stockLength: len(result.stockLengthMm),
+      pieces: result.pieces.map((p) => ({ label: p.label, count: p.count, center: len(p.center), back: len(p.back), throat: len(p.throat) })),
+      cuts: result.stock.cuts.map((c) => ({ n: c.n, centerAt: len(c.centerAtMm), longSideDeg: c.longSideDeg })),
+    };
+  }
+  if (isCone(result)) {
+    const extra =
+      result.form === 'concentric'
+        ? {
+            pattern: {
+              outerRadius: len(result.pattern.outerRadius),
+              innerRadius: len(result.pattern.innerRadius),
+              sweepDeg: result.pattern.sweepDeg,
+              slantHeight: len(result.pattern.slantHeight),
+            },
+          }
+        : {};
+    return { ...base, form: result.form, length: len(result.lengthMm), apexAngleDeg: result.apexAngleDeg, ...extra };
+  }
+  return base;
+}
