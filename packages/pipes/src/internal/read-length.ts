@@ -34,7 +34,7 @@ export const LENGTH_EXAMPLES = `462mm, 18.1875in, 18 3/16", 1'-6 3/16" or 2ft`;
 const QUANTITY = /^(?:(\d+)(?: +| *- *)(\d+) *\/ *(\d+)|(\d+) *\/ *(\d+)|(\d+(?:\.\d*)?|\.\d+))/;
 
 /** A unit mark at the start of the text. */
-const UNIT_MARK = /^(?:''|"|'|[a-zµ]+\.?)/;
+const UNIT_MARK = /^(?:''|"|'|[a-z]+\.?)/;
 
 interface Quantity {
   readonly value: number;

@@ -37,7 +37,9 @@ const MAX_STEPS = Number.MAX_SAFE_INTEGER / 2;
 
 /**
  * The denominator as given, when it is one of 8, 16 or 32.
+ * @param field the option named in errors; default `'fraction'`.
  * @throws GirthError `BAD_OPTION` otherwise.
+ * @example requireFractionDenominator(16) // 16
  */
 export function requireFractionDenominator(value: unknown, field = 'fraction'): FractionDenominator {
   if (value === 8 || value === 16 || value === 32) return value;

@@ -12,7 +12,12 @@ export type ScheduleName =
 const NUMBERED_B36_10M = new Set<string>(['10', '20', '30', '40', '60', '80', '100', '120', '140', '160']);
 const NUMBERED_B36_19M = new Set<string>(['5S', '10S', '40S', '80S']);
 
-/** True when the text has the shape of a schedule even if no table lists it (`sch 45`, `20S`). */
+/**
+ * True when the (lower-case) text has the shape of a schedule even if no table
+ * lists it (`sch 45`, `20s`), so errors can say "no such schedule" rather than
+ * "not a pipe name".
+ * @example looksLikeSchedule('sch 45') // true
+ */
 export function looksLikeSchedule(text: string): boolean {
   return /^(?:sch(?:ed(?:ule)?)?\.?[ -]*\d+ *s?|\d+ *s)$/.test(text);
 }
