@@ -48,6 +48,7 @@ export function developHeaderHole(input: HeaderHoleInput): Template {
     chordToleranceMm: input.chordToleranceMm,
     kinkPhisRad: g.holeKinkPhisRad,
     flatten,
+    longPoints: false,
   });
   const n = cut.stations.length;
   const outline = cut.samples.slice(0, -1).map(flatten); // the last sample repeats the first

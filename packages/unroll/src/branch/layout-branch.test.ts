@@ -84,10 +84,12 @@ describe('layoutBranch', () => {
         const t = phis.map((phi) => branchAxialClosedForm(R + g, r, A, e, phi));
         let tMax = -Infinity;
         for (let k = 0; k < 20_000; k++) tMax = Math.max(tMax, branchAxialClosedForm(R + g, r, A, e, (2 * Math.PI * k) / 20_000));
-        // Station cutbacks: the long point found by the layout is the true one to within the dense grid's step.
+        // Station cutbacks: the long point found by the layout is the true one to within the dense grid's step,
+        // and never short of it by more than the graze precision of the intersection (TANGENCY_REL_EPS: a graze
+        // within about 1e-6 R counts as touching, which matters only for sides within ~1e-10 mm of flush).
         const longAxial = cutbacks(cut).map((c, i) => c + t[i]!);
         expectClose(longAxial, longAxial.map(() => tMax), 1e-3, 'long point axial mm');
-        for (const v of longAxial) expect(v).toBeGreaterThanOrEqual(tMax - 1e-9);
+        for (const v of longAxial) expect(v).toBeGreaterThanOrEqual(tMax - 1e-6 * (R + g) - 1e-9);
         const holeR = spec.header.odMm / 2;
         expectClose(col(hole, 'girth'), phis.map((phi) => holeClosedForm(holeR, r, A, e, phi)[0]), 1e-7, 'hole girth mm');
         expectClose(col(hole, 'axial'), phis.map((phi) => holeClosedForm(holeR, r, A, e, phi)[1]), 1e-7, 'hole axial mm');

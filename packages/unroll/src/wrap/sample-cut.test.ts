@@ -116,6 +116,8 @@ describe('sampleCut', () => {
     expect(sampledMax).toBeGreaterThanOrEqual(denseMax - 1e-12);
     const stationMax = Math.max(...cut.stations.map((s) => s.axialMm));
     expect(sampledMax - stationMax).toBeGreaterThan(0.01); // it is truly off the stations
+    const without = sampleCut(branchBundle(r, 60), headerAlongX(R), { stations: 16, wrapOdMm: 2 * r, longPoints: false });
+    expect(Math.max(...without.samples.map((s) => s.axialMm))).toBeLessThan(denseMax - 1e-9);
   });
 
   it('follows a plane cut (miter ordinate)', () => {

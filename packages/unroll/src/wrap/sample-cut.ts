@@ -59,7 +59,7 @@ export interface CutSamples {
   /**
    * Hits ordered by phi from 0 to 2π inclusive; the last repeats the first
    * (same point, phi = 2π), closing the curve. Includes every station, every
-   * kink, and every long point (local maximum of `axialMm`).
+   * kink, and every long point (local maximum of `axialMm`) unless asked not to.
    */
   readonly samples: readonly GeneratorHit[];
 }
@@ -80,6 +80,12 @@ export interface SampleCutOptions {
    * passes its own development of the host.
    */
   readonly flatten?: (hit: GeneratorHit) => Point2;
+  /**
+   * Whether to locate the long points (local maxima of the axial position)
+   * and add them as samples; default true, since wrap templates measure the
+   * cutback from the long point. A hole template has no use for them.
+   */
+  readonly longPoints?: boolean;
 }
 
 interface Sample {
@@ -91,7 +97,8 @@ interface Sample {
  * Samples where the generators of `bundle` first meet `host`: the N stations,
  * and between them points chosen so that on the flat no chord departs from
  * the true curve by more than the chord tolerance. Kinks given in
- * `kinkPhisRad` and the long points are sample points exactly.
+ * `kinkPhisRad` and the long points (unless `longPoints` is false) are
+ * sample points exactly.
  *
  * @throws GirthError `NO_INTERSECTION` (field `stations`) naming the station
  *   or the angle where a generator misses the host; `OUT_OF_RANGE`,
@@ -142,7 +149,7 @@ export function sampleCut(bundle: GeneratorBundle, host: HostSurface, options: S
     }
   }
 
-  const samples = insertLongPoints(out, at).map((s) => s.hit);
+  const samples = (options.longPoints === false ? out : insertLongPoints(out, at)).map((s) => s.hit);
   return { kind: 'cut-samples', stations: stationSamples.map((s) => s.hit), samples };
 }
 
