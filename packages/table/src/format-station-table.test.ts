@@ -74,7 +74,7 @@ describe('formatStationTable', () => {
       [() => formatStationTable(NPS6, { format: 'yd' as never }), 'BAD_OPTION', 'options.format'],
       [() => formatStationTable(NPS6, { format: 'ft-in', fraction: 10 as never }), 'BAD_OPTION', ''],
       [
-        () => formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: 0 } }] }, { format: 'mm' }),
+        () => formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: 0, cutback: undefined as never } }] }, { format: 'mm' }),
         'NOT_A_NUMBER',
         'template.stations[0].lengthsMm.cutback',
       ],
@@ -97,5 +97,12 @@ describe('formatStationTable', () => {
       expect(caught.code).toBe(code);
       if (field) expect(caught.field).toBe(field);
     }
+  });
+
+  it('prints a dash where a station has no value in a column (the key is left out of the row)', () => {
+    // Invariant of the table layout: a row without a key gets a blank cell, the others keep their values.
+    const text = formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: 25.4 } }] }, { format: 'in' });
+    const row = text.split('\n').find((l) => /^\s*1\s/.test(l));
+    expect(row?.trim().split(/\s+/)).toEqual(['1', '0', '1.000"', '-']);
   });
 });

@@ -48,7 +48,7 @@ const oneLine = (s: string): string => s.replace(/[\u0000-\u001F\u007F-\u009F\u2
  * ```
  */
 export function formatStationTable(template: Template, options: StationTableTextOptions): string {
-  const { headings, rows } = stationCells(template, options);
+  const { headings, rows } = stationCells(template, { blank: '-', ...options });
   const cells = [headings, ...rows].map((r) => r.map(oneLine));
   const widths = headings.map((_, c) => Math.max(...cells.map((r) => r[c]!.length)));
   const line = (r: readonly string[]): string => r.map((cell, c) => cell.padStart(widths[c]!)).join(GAP).trimEnd();

@@ -3,6 +3,7 @@
  */
 import { GirthError, MM_PER_INCH, requireFinite } from '@girth/pipes';
 import type { LayoutResult, PipeUsed, Template } from '@girth/unroll';
+import { hasStationValue } from './internal/station-cells.js';
 import type { PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson, WarningJson } from './types.js';
 
 /**
@@ -43,7 +44,9 @@ function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: strin
       n: requireFinite(s.n, `${sf}.n`),
       angleDeg: denoise(requireFinite(s.angleDeg, `${sf}.angleDeg`)),
     };
-    for (const c of columns) row[c.key] = toUnit(s.lengthsMm?.[c.key], `${sf}.lengthsMm.${c.key}`);
+    for (const c of columns) {
+      if (hasStationValue(s, c.key)) row[c.key] = toUnit(s.lengthsMm[c.key], `${sf}.lengthsMm.${c.key}`);
+    }
     return row as StationJson;
   });
   return {

@@ -13,6 +13,8 @@ export interface StationTableOptions {
   readonly fraction?: 8 | 16 | 32;
   /** For `'in'` and `'mm'`: digits after the point, 0 to 6 (default 3 for in, 1 for mm). */
   readonly decimals?: number;
+  /** Text of a cell where a station has no value in a column (default empty). */
+  readonly blank?: string;
 }
 
 /** Options of {@link formatStationTable} only. */

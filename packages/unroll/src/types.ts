@@ -67,7 +67,12 @@ export interface StationColumn {
   readonly heading: string;
 }
 
-/** One row of the station table. Lengths in mm, keyed as the template's `stationColumns`. */
+/**
+ * One row of the station table. Lengths in mm, keyed as the template's
+ * `stationColumns`. A row leaves a key out where it has no value in that column
+ * (exporters print an empty cell and the JSON omits the key); a key that is
+ * present always holds a finite number.
+ */
 export interface StationRow {
   readonly n: number;
   readonly angleDeg: number;

@@ -40,6 +40,15 @@ function angleDecimals(anglesDeg: readonly number[]): number {
   return 3;
 }
 
+/**
+ * True when a station row has a value in a column. A row may leave a column out
+ * where it has no value (e.g. the first element of a triangulated pattern has no
+ * diagonal before it); a key that is present must hold a finite number.
+ */
+export function hasStationValue(row: Template['stations'][number], key: string): boolean {
+  return row.lengthsMm !== undefined && row.lengthsMm !== null && Object.prototype.hasOwnProperty.call(row.lengthsMm, key);
+}
+
 /** One length as the table writes it. */
 export function tableLength(mm: unknown, options: StationTableOptions, field: string): string {
   return formatLength(requireFinite(mm, field), {
@@ -68,7 +77,9 @@ export function stationCells(template: Template, options: StationTableOptions): 
   const rows = stations.map((s, i) => [
     String(requireFinite(s.n, `template.stations[${i}].n`)),
     angles[i]!.toFixed(decimals),
-    ...columns.map((c) => tableLength(s.lengthsMm?.[c.key], options, `template.stations[${i}].lengthsMm.${c.key}`)),
+    ...columns.map((c) =>
+      hasStationValue(s, c.key) ? tableLength(s.lengthsMm[c.key], options, `template.stations[${i}].lengthsMm.${c.key}`) : options.blank ?? '',
+    ),
   ]);
   return { headings: [STATION_HEADING, ANGLE_HEADING, ...columns.map((c) => String(c.heading))], rows };
 }
