@@ -6,7 +6,7 @@
 import { GirthError } from '../errors.js';
 import { requireFinite } from '../validate.js';
 import { ACCEPTED_UNIT_NAMES, readUnitName, suggestUnitName } from '../length/unit-names.js';
-import { MM_PER_WRITTEN_UNIT, lengthToMm, type LengthUnit, type WrittenLengthUnit } from '../length/units.js';
+import { INCHES_PER_FOOT, MM_PER_WRITTEN_UNIT, inchesToMm, lengthToMm, type LengthUnit, type WrittenLengthUnit } from '../length/units.js';
 import { normalizeInputText } from './normalize-text.js';
 
 /** A length read from text: its value in mm and the unit written, if any. */
@@ -35,6 +35,13 @@ const QUANTITY = /^(?:(\d+)(?: +| *- *)(\d+) *\/ *(\d+)|(\d+) *\/ *(\d+)|(\d+(?:
 
 /** A unit mark at the start of the text. */
 const UNIT_MARK = /^(?:''|"|'|[a-z]+\.?)/;
+
+/** A value in a written unit, in mm; inch-based units go through {@link inchesToMm}. */
+function writtenToMm(value: number, unit: WrittenLengthUnit): number {
+  if (unit === 'in') return inchesToMm(value);
+  if (unit === 'ft') return inchesToMm(value * INCHES_PER_FOOT);
+  return value * MM_PER_WRITTEN_UNIT[unit];
+}
 
 interface Quantity {
   readonly value: number;
@@ -131,7 +138,7 @@ export function readLength(input: string | number, options: ReadLengthOptions = 
 
   if (unit.unit !== 'ft') {
     if (unit.rest !== '') throw badLength(field, input, `unexpected "${unit.rest}" after the unit`);
-    const mm = checkSign(first.value * MM_PER_WRITTEN_UNIT[unit.unit], negative, options, field, input);
+    const mm = checkSign(writtenToMm(first.value, unit.unit), negative, options, field, input);
     return { kind: 'read-length', mm, writtenUnit: unit.unit };
   }
 
@@ -150,6 +157,6 @@ export function readLength(input: string | number, options: ReadLengthOptions = 
       if (inchUnit.rest !== '') throw badLength(field, input, `unexpected "${inchUnit.rest}" after the inches`);
     }
   }
-  const mm = checkSign(first.value * MM_PER_WRITTEN_UNIT.ft + inches * MM_PER_WRITTEN_UNIT.in, negative, options, field, input);
+  const mm = checkSign(inchesToMm(first.value * INCHES_PER_FOOT + inches), negative, options, field, input);
   return { kind: 'read-length', mm, writtenUnit: 'ft' };
 }

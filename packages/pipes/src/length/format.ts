@@ -5,7 +5,7 @@
 import { GirthError } from '../errors.js';
 import { requireFinite } from '../validate.js';
 import { feetInchParts, requireFractionDenominator, type FractionDenominator } from './fraction.js';
-import { MM_PER_INCH, type LengthFormat } from './units.js';
+import { mmToInches, type LengthFormat } from './units.js';
 
 /** Options of {@link formatLength}. */
 export interface FormatLengthOptions {
@@ -59,7 +59,7 @@ export function formatLength(mm: number, options: FormatLengthOptions): string {
     case 'mm':
       return `${fixed(v, requireDecimals(options.decimals ?? DEFAULT_DECIMALS.mm))} mm`;
     case 'in':
-      return `${fixed(v / MM_PER_INCH, requireDecimals(options.decimals ?? DEFAULT_DECIMALS.in))}"`;
+      return `${fixed(mmToInches(v), requireDecimals(options.decimals ?? DEFAULT_DECIMALS.in))}"`;
     case 'ft-in': {
       const p = feetInchParts(v, requireFractionDenominator(options.fraction ?? 16));
       const sign = p.negative ? '-' : '';

@@ -4,7 +4,7 @@
  */
 import { GirthError } from '../errors.js';
 import { requireFinite } from '../validate.js';
-import { INCHES_PER_FOOT, MM_PER_INCH } from './units.js';
+import { INCHES_PER_FOOT, inchesToMm, mmToInches } from './units.js';
 
 /** The inch fractions a tape is read to: 1/8, 1/16 (the default in the field) or 1/32. */
 export type FractionDenominator = 8 | 16 | 32;
@@ -58,7 +58,7 @@ export function requireFractionDenominator(value: unknown, field = 'fraction'): 
 function toSteps(mm: number, denominator: FractionDenominator, field: string): number {
   const v = requireFinite(mm, field);
   const den = requireFractionDenominator(denominator);
-  const exact = (Math.abs(v) / MM_PER_INCH) * den;
+  const exact = mmToInches(Math.abs(v)) * den;
   if (exact > MAX_STEPS) {
     throw new GirthError('OUT_OF_RANGE', field, `${field}: ${v} mm is too long to write in inch fractions`, mm);
   }
@@ -80,7 +80,7 @@ function toSteps(mm: number, denominator: FractionDenominator, field: string): n
  */
 export function roundToFraction(mm: number, denominator: FractionDenominator): number {
   const steps = toSteps(mm, denominator, 'length');
-  const r = (steps / denominator) * MM_PER_INCH;
+  const r = inchesToMm(steps / denominator);
   return r === 0 ? 0 : r;
 }
 

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { GirthError } from '../errors.js';
 import { expectClose } from '../internal/test-support/expect-close.js';
 import { parseLength } from './parse.js';
-import { MM_PER_FOOT, MM_PER_INCH, lengthToMm, mmToLength } from './units.js';
+import { MM_PER_FOOT, MM_PER_INCH, inchesToMm, lengthToMm, mmToInches, mmToLength } from './units.js';
 
 /** Floating-point slack for exact conversions, mm. */
 const EPS_MM = 1e-9;
@@ -28,6 +28,16 @@ describe('unit constants', () => {
     expectClose(lengthToMm(16, 'in'), 406.4, EPS_MM, '16 in');
     expectClose(mmToLength(406.4, 'in'), 16, 1e-12, '406.4 mm');
     expect(lengthToMm(406.4, 'mm')).toBe(406.4);
+  });
+
+  it('lands on the decimal result for common inch values', () => {
+    // 0.375 in = 9.525 mm and 16 in = 406.4 mm exactly (1 in = 25.4 mm).
+    expect(inchesToMm(0.375)).toBe(9.525);
+    expect(inchesToMm(16)).toBe(406.4);
+    expect(mmToInches(406.4)).toBe(16);
+    expect(mmToInches(9.525)).toBe(0.375);
+    // Every sixteenth up to 100 in converts to the double nearest k x 25.4 / 16.
+    for (let k = 0; k <= 1600; k++) expect(inchesToMm(k / 16)).toBe((k * 254) / 160);
   });
 });
 

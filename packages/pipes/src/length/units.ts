@@ -35,12 +35,32 @@ export const MM_PER_WRITTEN_UNIT: Readonly<Record<WrittenLengthUnit, number>> = 
 };
 
 /**
+ * Inches to millimetres, computed as `inches x 254 / 10`: the same exact factor
+ * as 25.4, but it lands on the nearest double of the decimal result more often
+ * (0.375 in gives 9.525, not 9.524999999999999).
+ * @param inches any finite number of inches.
+ * @example inchesToMm(0.375) // 9.525
+ */
+export function inchesToMm(inches: number): number {
+  return (inches * 254) / 10;
+}
+
+/**
+ * Millimetres to inches, computed as `mm x 10 / 254` (see {@link inchesToMm}).
+ * @param mm any finite number of millimetres.
+ * @example mmToInches(406.4) // 16
+ */
+export function mmToInches(mm: number): number {
+  return (mm * 10) / 254;
+}
+
+/**
  * A length given in `unit` converted to millimetres. No rounding.
  * @param value the length in `unit`; any finite number.
  * @example lengthToMm(16, 'in') // 406.4
  */
 export function lengthToMm(value: number, unit: LengthUnit): number {
-  return unit === 'in' ? value * MM_PER_INCH : value;
+  return unit === 'in' ? inchesToMm(value) : value;
 }
 
 /**
@@ -49,5 +69,5 @@ export function lengthToMm(value: number, unit: LengthUnit): number {
  * @example mmToLength(406.4, 'in') // 16
  */
 export function mmToLength(mm: number, unit: LengthUnit): number {
-  return unit === 'in' ? mm / MM_PER_INCH : mm;
+  return unit === 'in' ? mmToInches(mm) : mm;
 }

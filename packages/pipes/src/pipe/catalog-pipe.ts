@@ -4,7 +4,7 @@
  */
 import { findB3610mSize, findB3619mSize, B36_10M_SCHEDULE_ORDER, B36_19M_SCHEDULE_ORDER } from '../catalog/lookup.js';
 import type { B3610mSize } from '../catalog/types.js';
-import { MM_PER_INCH } from '../length/units.js';
+import { inchesToMm } from '../length/units.js';
 import { makePipe } from './make-pipe.js';
 import { scheduleLabel, type ScheduleName } from './schedule-name.js';
 import type { Pipe } from './types.js';
@@ -28,8 +28,8 @@ export function asmeCatalogPipe(size: B3610mSize, schedule: ScheduleName, field:
   const sch = scheduleLabel(schedule);
   return makePipe(
     {
-      odMm: size.odIn * MM_PER_INCH,
-      wallMm: wallIn * MM_PER_INCH,
+      odMm: inchesToMm(size.odIn),
+      wallMm: inchesToMm(wallIn),
       label: `NPS ${size.nps} ${sch}`,
       standard: schedule.kind === 'b36.10m-schedule' ? 'ASME B36.10M' : 'ASME B36.19M',
       nps: size.nps,

@@ -8,7 +8,7 @@ import { findB3610mSize, findB3610mSizeByDn, findEn10220Size, nearbyDn, nearbyNp
 import type { B3610mSize } from '../catalog/types.js';
 import { normalizeInputText } from '../internal/normalize-text.js';
 import { readLength, type ReadLength } from '../internal/read-length.js';
-import { MM_PER_INCH, type LengthUnit } from '../length/units.js';
+import { inchesToMm, mmToInches, type LengthUnit } from '../length/units.js';
 import { asmeCatalogPipe, asmeSchedulesOf } from './catalog-pipe.js';
 import { makePipe, trimmedNumber } from './make-pipe.js';
 import { readNpsAtStart } from './nps-text.js';
@@ -151,10 +151,10 @@ function resolveNpsWithWall(ctx: Context, sizeText: string, wallPart: string): P
   if (size === undefined) throw unknownNps(ctx, nps.npsIn);
   const wall = readPart(ctx, wallText(wallPart), ctx.unit, 'wall');
   const inches = wall.writtenUnit === 'in' || wall.writtenUnit === 'ft' || (wall.writtenUnit === undefined && ctx.unit === 'in');
-  const wallLabel = inches ? `${(wall.mm / MM_PER_INCH).toFixed(3)} in` : `${trimmedNumber(wall.mm)} mm`;
+  const wallLabel = inches ? `${mmToInches(wall.mm).toFixed(3)} in` : `${trimmedNumber(wall.mm)} mm`;
   return makePipe(
     {
-      odMm: size.odIn * MM_PER_INCH,
+      odMm: inchesToMm(size.odIn),
       wallMm: wall.mm,
       label: `NPS ${size.nps} x ${wallLabel}`,
       standard: 'ASME B36.10M',
@@ -177,7 +177,7 @@ function resolveOdByWall(ctx: Context, odPart: string, wallPart: string): Pipe {
   const unit = od.writtenUnit ?? ctx.unit;
   const inches = unit === 'in' || unit === 'ft';
   const label = inches
-    ? `${(od.mm / MM_PER_INCH).toFixed(3)} OD x ${(wall.mm / MM_PER_INCH).toFixed(3)} in`
+    ? `${mmToInches(od.mm).toFixed(3)} OD x ${mmToInches(wall.mm).toFixed(3)} in`
     : `${trimmedNumber(od.mm)} x ${trimmedNumber(wall.mm)} mm`;
   return makePipe({ odMm: od.mm, wallMm: wall.mm, label, standard: 'custom' }, ctx.field);
 }
