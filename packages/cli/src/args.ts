@@ -22,17 +22,45 @@ export interface ParsedArgs {
  */
 export function parseOptions(argv: readonly string[], options: OptionSpec, allowPositionals = false): ParsedArgs {
   try {
-    const { values, positionals } = parseArgs({ args: [...argv], options, allowPositionals, strict: true });
+    const { values, positionals } = parseArgs({ args: joinNegativeValues(argv, options), options, allowPositionals, strict: true });
     return { values: values as ParsedArgs['values'], positionals };
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     const option = /'(-{1,2}[^' ]+)/.exec(message)?.[1] ?? 'arguments';
-    throw new GirthError('BAD_OPTION', option, `${option}: ${firstSentence(message)}`, option);
+    const hint = /argument is ambiguous/.test(message) ? `; a value that starts with "-" is written joined, ${option}=VALUE` : '';
+    throw new GirthError('BAD_OPTION', option, `${option}: ${firstSentence(message)}${hint}`, option);
   }
 }
 
+/**
+ * `--offset -1` becomes `--offset=-1`. `util.parseArgs` takes a word that
+ * starts with a dash as the next option, but after a string option a negative
+ * number (`-1`, `-2 1/2`, `-.5`) can only be its value: no option is spelled
+ * with a digit.
+ */
+function joinNegativeValues(argv: readonly string[], options: OptionSpec): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < argv.length; i += 1) {
+    const word = argv[i]!;
+    if (word === '--') {
+      out.push(...argv.slice(i));
+      break;
+    }
+    const next = argv[i + 1];
+    const name = word.startsWith('--') && !word.includes('=') ? word.slice(2) : undefined;
+    const spec = name !== undefined && Object.hasOwn(options, name) ? options[name] : undefined;
+    if (spec?.type === 'string' && next !== undefined && /^-\.?\d/.test(next)) {
+      out.push(`${word}=${next}`);
+      i += 1;
+    } else {
+      out.push(word);
+    }
+  }
+  return out;
+}
+
 function firstSentence(message: string): string {
-  const cut = message.indexOf('. ');
+  const cut = message.search(/\.\s/);
   return cut > 0 ? message.slice(0, cut) : message;
 }
 
