@@ -32,6 +32,9 @@ export const RUN_HELP = `girth run: lay out every piece of a job file
 
 Usage: girth run JOB.json --out DIR [--force]
 
+Example:
+  girth run fixtures/demo/job.json --out demo-out
+
 Writes, for each piece, its templates as SVG and DXF and its station tables as
 CSV (the job's "outputs" list may narrow that), named after the piece label,
 and one summary.txt with the summary table and every ordinate table. Nothing is
@@ -48,4 +51,6 @@ Keys of a piece are those of its command's options in camelCase (radiusNps,
 includedAngle, branchSurface); lengths are text ("2 1/2\\"", "63.5mm") or numbers
 in the job's unit. Optional job keys: decimal, fraction (8|16|32),
 dxfVersion ("2007"|"r12"), outputs (["svg","dxf","csv"]).
+
+${REPORT_CAUTION}
 `;

@@ -3,8 +3,8 @@
  * code back. `main.ts` only wires it to the process.
  */
 import { readFile } from 'node:fs/promises';
-import { GirthError, resolvePipe } from '@girth/pipes';
-import { parseOptions, stringOption } from './args.js';
+import { GirthError, resolvePipe, type LengthUnit } from '@girth/pipes';
+import { choiceOption, parseOptions, stringOption } from './args.js';
 import { COMMON_OPTIONS, COMMON_OPTIONS_HELP, readCommonOptions } from './commands/common-options.js';
 import { JOINT_COMMANDS, type JointCommand } from './commands/joint-commands.js';
 import { mainHelp, RUN_HELP } from './help.js';
@@ -18,6 +18,10 @@ import { writeFilesAtomically } from './write-files.js';
 
 /** The version printed by `--version`. */
 export const GIRTH_VERSION = '0.1.0';
+
+/** Printed under pipe dimensions: they are nominal, the pipe on the rack is not. */
+export const PIPE_CAUTION =
+  'CAUTION: nominal dimensions from the standard; measure the actual pipe (OD, wall, out-of-round) before laying out or cutting.';
 
 /** Exit codes: 0 done, 2 bad input (nothing written), 1 an unexpected failure. */
 export const EXIT = { ok: 0, failure: 1, badInput: 2 } as const;
@@ -117,13 +121,16 @@ async function runJobCommand(argv: readonly string[], io: CliIo): Promise<void> 
 async function pipeCommand(argv: readonly string[], io: CliIo): Promise<void> {
   const args = parseOptions(argv, { units: { type: 'string' }, help: { type: 'boolean', short: 'h' } }, true);
   if (args.values.help === true || args.positionals.length === 0) {
-    io.out('girth pipe NAME [--units in|mm]: what a pipe name resolves to\n  girth pipe "NPS 16 STD"\n  girth pipe "DN 150 x 7.1"\n  girth pipe "24 od x .375"\n');
+    io.out(
+      'girth pipe NAME [--units in|mm]: what a pipe name resolves to\n\nExamples:\n  girth pipe "NPS 16 STD"\n  girth pipe "DN 150 x 7.1"\n  girth pipe "24 od x .375" --units in\n\n' +
+        `${PIPE_CAUTION}\n`,
+    );
     return;
   }
-  const unit = stringOption(args, 'units') === 'in' ? 'in' : 'mm';
+  const unit = choiceOption<LengthUnit>(args, 'units', ['in', 'mm'], 'mm');
   const pipe = resolvePipe(args.positionals.join(' '), { unit, field: 'pipe' });
   const inch = (mm: number): string => `${(mm / 25.4).toFixed(3)} in`;
   io.out(
-    `${pipe.label} (${pipe.standard})\n  OD   ${pipe.odMm.toFixed(2)} mm  ${inch(pipe.odMm)}\n  wall ${pipe.wallMm.toFixed(2)} mm  ${inch(pipe.wallMm)}\n  ID   ${pipe.idMm.toFixed(2)} mm  ${inch(pipe.idMm)}\n`,
+    `${pipe.label} (${pipe.standard})\n  OD   ${pipe.odMm.toFixed(2)} mm  ${inch(pipe.odMm)}\n  wall ${pipe.wallMm.toFixed(2)} mm  ${inch(pipe.wallMm)}\n  ID   ${pipe.idMm.toFixed(2)} mm  ${inch(pipe.idMm)}\n${PIPE_CAUTION}\n`,
   );
 }
