@@ -114,6 +114,15 @@ export function parseJob(data: unknown): Job {
   const checked = job.safeParse(data);
   if (!checked.success) {
     const issue = checked.error.issues[0]!;
+    if (issue.code === 'unrecognized_keys') {
+      // Name the key itself (`pieces[2].colour`), not only the object holding it.
+      const field = fieldPath([...issue.path, issue.keys[0]!]);
+      const expected =
+        issue.path.length === 0
+          ? `a job takes ${Object.keys(job.shape).join(', ')}`
+          : "a piece takes its command's options in camelCase (girth run --help)";
+      throw new GirthError('BAD_JOB', field, `${field}: unknown key; ${expected}`);
+    }
     const field = fieldPath(issue.path);
     throw new GirthError('BAD_JOB', field, `${field}: ${issue.message}`);
   }
