@@ -59,6 +59,8 @@ export function layoutJoint(input: JointInput, ctx: JointContext): LayoutResult 
     }
   } catch (error) {
     throw renameField(error, (field) => {
+      // Already named as the user wrote it (`--header`, `pieces[1].header`).
+      if (field.startsWith(ctx.fieldPrefix)) return undefined;
       const root = field.split(/[.[]/)[0] ?? field;
       const name = FIELD_NAMES[root] ?? (['header', 'branch', 'pipe', 'large', 'small'].includes(root) ? root : undefined);
       return name === undefined ? undefined : ctx.fieldName(name);
