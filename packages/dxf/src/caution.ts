@@ -1,11 +1,12 @@
 /**
- * The one-line caution every Girth DXF carries on its text layer.
+ * The caution a DXF carries is `CAUTION` of `@girth/unroll`, written once on
+ * the `TEXT` layer by `templateToDxf`. This file keeps the old name working.
  */
+import { CAUTION } from '@girth/unroll';
 
 /**
- * Caution written on the `TEXT` layer of every DXF, ASCII only.
- * @example DXF_CAUTION.startsWith('CAUTION') // true
+ * @deprecated Use `CAUTION` from `@girth/unroll` (the same text). Kept as an
+ * alias because the package README's import example still names it.
+ * @example DXF_CAUTION === CAUTION // true
  */
-export const DXF_CAUTION =
-  'CAUTION: verify against the actual pipe before cutting. Follow qualified procedures, ASME B31.1/B31.3, ' +
-  'local rules and licensed practice. Geometry only: Girth does not size reinforcement.';
+export const DXF_CAUTION: string = CAUTION;

@@ -3,7 +3,7 @@
  * dxf-parser and audited with ezdxf.
  */
 import { describe, expect, it } from 'vitest';
-import { layoutConcentricCone, layoutEccentricCone } from '@girth/unroll';
+import { CAUTION, layoutBranch, layoutConcentricCone, layoutEccentricCone, layoutMiter, layoutPlaneCut, type Template } from '@girth/unroll';
 import { templateToDxf } from './template-to-dxf.js';
 import { expectClose } from './test-support/close.js';
 import { bulgeRadius, polylinesOf } from './test-support/contours.js';
@@ -46,6 +46,21 @@ describe('DXF of unroll layouts', () => {
       expect(report.hasErrors, `${key}: ${report.errors.join('; ')}`).toBe(false);
       // Each pattern is one closed contour to cut.
       expect(report.closedByLayer['CUT'], key).toBe(1);
+    }
+  });
+
+  it('writes the caution once per file, whole on one TEXT line, for every joint (the notes carry none)', () => {
+    // ASME B36.10M, recalled (REFERENCES.md): NPS 10 STD OD 10.750 in wall 0.365 in; NPS 4 STD OD 4.500 in wall 0.237 in.
+    const run = { odMm: 10.75 * IN, wallMm: 0.365 * IN, label: 'NPS 10 STD', npsIn: 10 };
+    const small = { odMm: 4.5 * IN, wallMm: 0.237 * IN, label: 'NPS 4 STD', npsIn: 4 };
+    const reducer = { largeDiameterMm: run.odMm, smallDiameterMm: small.odMm, lengthMm: 250, thicknessMm: 8 };
+    const templates: Template[] = [];
+    for (const layout of [layoutBranch({ header: run, branch: small, angleDeg: 60, offsetMm: 20 }), layoutPlaneCut({ pipe: run, angleDeg: 75 })]) templates.push(...layout.templates);
+    for (const layout of [layoutMiter({ pipe: small, bendDeg: 45, welds: 2, radiusNps: 1.5 }), layoutConcentricCone(reducer), layoutEccentricCone(reducer)]) templates.push(...layout.templates);
+    expect(templates.map((t) => t.id)).toEqual(['branch-cut', 'header-hole', 'plane-cut', 'miter-end', 'miter-middle', 'cone-pattern', 'cone-pattern']);
+    for (const t of templates) {
+      const texts = parseDxf(templateToDxf(t, { version: 'R12' })).entities.flatMap((e) => (e.type === 'TEXT' ? [(e as unknown as { text: string }).text] : []));
+      expect(texts.filter((x) => /CAUTION/i.test(x)), t.id).toEqual([CAUTION]);
     }
   });
 });

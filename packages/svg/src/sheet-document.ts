@@ -3,9 +3,8 @@
  * `<desc>` and `<metadata>` (job, piece, template id, stretch-out).
  */
 import type { INode } from 'svgson';
-import type { Template } from '@girth/unroll';
+import { CAUTION, type Template } from '@girth/unroll';
 import type { ResolvedSvgOptions } from './types.js';
-import { SHEET_CAUTION } from './cautions.js';
 import { el, textNodes } from './internal/nodes.js';
 import { textLines } from './internal/safe-text.js';
 
@@ -25,7 +24,7 @@ const mm3 = (v: number): string => String(Math.round(v * 1000) / 1000);
 export function describeSheet(template: Template, options: ResolvedSvgOptions): INode[] {
   const who = [options.job, options.piece].filter((s): s is string => s !== undefined).map(oneLine);
   const title = [...who, oneLine(template.title)].join(' — ');
-  const desc = [...template.notes.map(oneLine), SHEET_CAUTION].join('\n');
+  const desc = [...template.notes.map(oneLine), CAUTION].join('\n');
   return [
     el('title', {}, textNodes(title)),
     el('desc', {}, textNodes(desc)),

@@ -1,13 +1,12 @@
 import { describe, expect, test } from 'vitest';
 import { templateToSvg } from './template-to-svg.js';
-import { SHEET_CAUTION } from './cautions.js';
 import { STROKE_MM } from './style.js';
 import { coneSector, DEMO_JOB, DEMO_PIECE, planeCutWrap, teeHole } from './test-support/fixtures.js';
 import { byId, elements, parseSvg, sheetSize, textOf } from './test-support/parse.js';
 import { pathBounds, readPath, type ReadPath } from './test-support/path-geometry.js';
 import { expectClose } from './test-support/expect-close.js';
 import type { INode } from 'svgson';
-import type { StationLine } from '@girth/unroll';
+import { CAUTION, type StationLine } from '@girth/unroll';
 
 const IN = 25.4;
 const DEG = Math.PI / 180;
@@ -93,21 +92,21 @@ describe('templateToSvg: groups and what every sheet carries', () => {
     expect(w('square-line')).toBeGreaterThan(w('marks'));
   });
 
-  test('the title block carries job, piece, title, notes, placement and the caution', () => {
+  test('the title block carries job, piece, title, notes, placement and the caution once', () => {
     const text = textOf(byId(root, 'title-block'));
     expect(text).toContain(`Job: ${DEMO_JOB}`);
     expect(text).toContain(`Piece: ${DEMO_PIECE}`);
     expect(text).toContain(wrap.title);
     for (const n of wrap.notes) expect(text).toContain(n);
     expect(text).toContain('Wrap on the 168.275 mm OD: edge x = 0 on the heel line');
-    expect(text).toContain(SHEET_CAUTION);
-    expect(text).toContain('Verify against the actual pipe before cutting');
-    expect(text).toContain('ASME B31.1/B31.3');
+    // Project rule: printed templates carry the caution; one line of it, not one per note.
+    expect(text.split(CAUTION)).toHaveLength(2);
+    expect(elements(root, 'text').map(textOf).join('\n').split('CAUTION')).toHaveLength(2);
   });
 
   test('title, desc and metadata describe the sheet', () => {
     expect(textOf(elements(root, 'title')[0] as INode)).toBe(`${DEMO_JOB} — ${DEMO_PIECE} — ${wrap.title}`);
-    expect(textOf(elements(root, 'desc')[0] as INode)).toContain('reinforcement not sized');
+    expect(textOf(elements(root, 'desc')[0] as INode).split(CAUTION)).toHaveLength(2);
     const meta = elements(root, 'girth:sheet')[0] as INode;
     expect(meta.attributes).toMatchObject({
       job: DEMO_JOB,

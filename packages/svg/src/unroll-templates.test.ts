@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { layoutConcentricCone, layoutEccentricCone, type Template } from '@girth/unroll';
+import { CAUTION, layoutBranch, layoutConcentricCone, layoutEccentricCone, layoutMiter, layoutPlaneCut, type Template } from '@girth/unroll';
 import { templateToSvg } from './template-to-svg.js';
 import { DEMO_JOB, DEMO_PIECE } from './test-support/fixtures.js';
 import { byId, elements, parseSvg, sheetSize, textOf } from './test-support/parse.js';
@@ -64,6 +64,24 @@ describe('templates made by @girth/unroll', () => {
         );
         expect(new Set(named)).toEqual(new Set(t.stationLines.map((l) => l.n)));
       }
+    }
+  });
+
+  test('every joint\'s sheet shows the caution once: in the title block, not again among the notes', () => {
+    // NPS 12 STD and NPS 6 STD: OD 12.750 / 6.625 in, walls 0.375 / 0.280 in (ASME B36.10M, recalled;
+    // REFERENCES.md). Miter radius 1.5 x NPS, as a long-radius elbow (ASME B16.9, recalled).
+    const nps12 = { odMm: 12.75 * IN, wallMm: 0.375 * IN, label: 'NPS 12 STD', npsIn: 12 };
+    const nps6 = { odMm: 6.625 * IN, wallMm: 0.28 * IN, label: 'NPS 6 STD', npsIn: 6 };
+    const cone = { largeDiameterMm: nps12.odMm, smallDiameterMm: nps6.odMm, lengthMm: 356, thicknessMm: 6 };
+    const sheets = [
+      layoutBranch({ header: nps12, branch: nps6, angleDeg: 45 }), layoutPlaneCut({ pipe: nps6, angleDeg: 60 }),
+      layoutMiter({ pipe: nps12, bendDeg: 90, pieces: 4, radiusNps: 1.5 }), layoutConcentricCone(cone), layoutEccentricCone(cone),
+    ].flatMap((layout) => layout.templates.map((t) => parseSvg(templateToSvg(t))));
+    expect(sheets).toHaveLength(2 + 1 + 2 + 1 + 1);
+    for (const root of sheets) {
+      const printed = elements(root, 'text').map(textOf).join('\n');
+      expect(printed.split('CAUTION')).toHaveLength(2);
+      expect(textOf(byId(root, 'title-block')).split(CAUTION)).toHaveLength(2);
     }
   });
 });

@@ -1,11 +1,12 @@
 /**
- * The caution printed under every station table.
+ * The caution under a printed station table is `CAUTION` of `@girth/unroll`,
+ * written once by `formatStationTable`. This file keeps the old name working.
  */
+import { CAUTION } from '@girth/unroll';
 
 /**
- * One-line caution for printed tables.
- * @example TABLE_CAUTION.startsWith('CAUTION') // true
+ * @deprecated Use `CAUTION` from `@girth/unroll` (the same text). Kept as an
+ * alias because the command line (`@girth/cli`) still imports it.
+ * @example TABLE_CAUTION === CAUTION // true
  */
-export const TABLE_CAUTION =
-  'CAUTION: verify against the actual pipe before cutting; follow qualified procedures, ASME B31.1/B31.3, ' +
-  'local rules and licensed practice. Girth lays out geometry only and does not size reinforcement.';
+export const TABLE_CAUTION: string = CAUTION;

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { isGirthError } from '@girth/pipes';
-import type { Template } from '@girth/unroll';
-import { TABLE_CAUTION } from './caution.js';
+import { CAUTION, type Template } from '@girth/unroll';
 import { formatStationTable } from './format-station-table.js';
 import { INCH, planeCutWrap } from './test-support/fixtures.js';
 
@@ -50,11 +49,12 @@ describe('formatStationTable', () => {
     expect(rowOf(formatStationTable(NPS6, { format: 'in' }), 9)[3]).toBe('2.744"');
   });
 
-  it('right-aligns every column and ends with the caution', () => {
+  it('right-aligns every column and ends with the caution, once', () => {
     const lines = formatStationTable(NPS6, { format: 'ft-in' }).split('\n');
     const body = lines.slice(3, 3 + 2 + 16);
     expect(new Set(body.map((l) => l.length)).size).toBe(1); // headings, rule and rows equally wide
-    expect(lines.at(-2)).toBe(TABLE_CAUTION);
+    expect(lines.at(-2)).toBe(CAUTION);
+    expect(lines.filter((l) => l.includes('CAUTION'))).toHaveLength(1);
     expect(formatStationTable(NPS6, { format: 'ft-in', caution: false })).not.toContain('CAUTION');
   });
 

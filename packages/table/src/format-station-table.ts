@@ -1,8 +1,7 @@
 /**
  * The station table as aligned text, for the terminal and for printing.
  */
-import type { Template } from '@girth/unroll';
-import { TABLE_CAUTION } from './caution.js';
+import { CAUTION, type Template } from '@girth/unroll';
 import { stationCells, tableLength } from './internal/station-cells.js';
 import type { StationTableTextOptions } from './types.js';
 
@@ -18,7 +17,8 @@ const oneLine = (s: string): string => s.replace(/[\u0000-\u001F\u007F-\u009F\u2
  * Layout: the template title, the stretch-out for wraps, a blank line, the
  * column headings (`Station`, `Angle (deg)`, then the template's station
  * columns), a rule, one right-aligned row per station, and (unless
- * `caution: false`) a blank line and a one-line caution. Lengths are written
+ * `caution: false`) a blank line and the one-line `CAUTION` of `@girth/unroll`
+ * (once; the template's notes are not printed). Lengths are written
  * by `formatLength` of `@girth/pipes`: feet-inch-sixteenths for `'ft-in'`
  * (1/8 or 1/32 with `fraction`), decimal inches or millimetres otherwise.
  * Angles get the fewest decimals (0 to 3) that show every station exactly.
@@ -56,6 +56,6 @@ export function formatStationTable(template: Template, options: StationTableText
   if (template.stretchOutMm !== undefined) out.push(`Stretch-out: ${tableLength(template.stretchOutMm, options, 'template.stretchOutMm')}`);
   out.push('', line(cells[0]!), widths.map((w) => '-'.repeat(w)).join(GAP));
   for (const r of cells.slice(1)) out.push(line(r));
-  if (options.caution ?? true) out.push('', TABLE_CAUTION);
+  if (options.caution ?? true) out.push('', CAUTION);
   return out.join('\n') + '\n';
 }

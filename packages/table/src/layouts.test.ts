@@ -2,7 +2,7 @@
  * Tables and JSON of results made by Girth's own layouts (@girth/unroll).
  */
 import { describe, expect, it } from 'vitest';
-import { layoutConcentricCone } from '@girth/unroll';
+import { CAUTION, layoutBranch, layoutConcentricCone, layoutEccentricCone, layoutMiter, layoutPlaneCut } from '@girth/unroll';
 import { formatStationTable } from './format-station-table.js';
 import { toResultJson } from './result-json.js';
 
@@ -39,5 +39,25 @@ describe('tables of unroll layouts', () => {
     // 25.133 in = 2 ft 1 1/8 in (1.133 x 16 = 18.1); 15.708 in = 1 ft 3 11/16 in (3.708 x 16 = 59.3);
     // element 4.272 in = 4 1/4 in (4.272 x 16 = 68.4).
     expect(last.trim().split(/\s{2,}/)).toEqual(['17', '360.0', `2'-1 1/8"`, `1'-3 11/16"`, '4 1/4"']);
+  });
+
+  it('ends every joint\'s table with the caution, once', () => {
+    // DN 200 and DN 100: OD 219.1 and 114.3 mm (EN 10220 series 1, recalled; REFERENCES.md), walls of our choosing.
+    const dn200 = { odMm: 219.1, wallMm: 6.3, label: 'DN 200' };
+    const dn100 = { odMm: 114.3, wallMm: 3.6, label: 'DN 100' };
+    const byKind = {
+      branch: layoutBranch({ header: dn200, branch: dn100, angleDeg: 90, fit: 'set-in' }),
+      planeCut: layoutPlaneCut({ pipe: dn100, angleDeg: 50 }),
+      miter: layoutMiter({ pipe: dn200, bendDeg: 60, welds: 2, radiusMm: 300 }),
+      concentric: layoutConcentricCone({ largeDiameterMm: 219.1, smallDiameterMm: 114.3, lengthMm: 200, thicknessMm: 6 }),
+      eccentric: layoutEccentricCone({ largeDiameterMm: 219.1, smallDiameterMm: 114.3, lengthMm: 200, thicknessMm: 6 }),
+    };
+    for (const [kind, layout] of Object.entries(byKind)) {
+      for (const template of layout.templates) {
+        const lines = formatStationTable(template, { format: 'mm' }).trimEnd().split('\n');
+        expect(lines.at(-1), kind).toBe(CAUTION);
+        expect(lines.filter((l) => /caution/i.test(l)), kind).toHaveLength(1);
+      }
+    }
   });
 });

@@ -1,4 +1,5 @@
 export * from './types.js';
+export * from './caution.js';
 export * from './wrap/sample-cut.js';
 export * from './wrap/develop-wrap.js';
 export * from './cone/index.js';

@@ -3,8 +3,7 @@
  * conversion to the output unit. Pure; every number is checked on the way.
  */
 import { GirthError, MM_PER_INCH } from '@girth/pipes';
-import type { Template } from '@girth/unroll';
-import { DXF_CAUTION } from '../caution.js';
+import { CAUTION, type Template } from '@girth/unroll';
 import { dxfSafeText } from '../dxf-text.js';
 import { checkLengthMm, checkPointMm } from './checks.js';
 import { flattenControls } from './flatten-controls.js';
@@ -99,7 +98,7 @@ function titleEntities(template: Template, o: ResolvedDxfOptions, drawn: readonl
   if (jobLine) add(jobLine, small);
   requireList(template.notes ?? [], 'template.notes').forEach((note) => add(String(note), small));
   add(`Full size 1:1, units ${o.units === 'in' ? 'inch' : 'mm'}. Template ${String(template.id)}.`, small);
-  lines.push([DXF_CAUTION, small]); // one line, as it is
+  lines.push([CAUTION, small]); // once, one line, as it is (printable ASCII)
   const out: SheetEntity[] = [];
   y -= h; // clear of the geometry
   for (const [content, height] of lines) {

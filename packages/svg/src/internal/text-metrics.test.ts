@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { textWidthMm } from './text-metrics.js';
-import { SHEET_CAUTION } from '../cautions.js';
+import { CAUTION } from '@girth/unroll';
 import { resvgOf } from '../test-support/render.js';
 
 /** Width of a line as resvg sets it in DejaVu Sans (the widest font the sheet names), mm. */
@@ -15,7 +15,7 @@ function realWidthMm(text: string, fontMm: number, bold: boolean): number {
 describe('textWidthMm over-estimates DejaVu Sans, so nothing is clipped', () => {
   const samples = [
     'HEEL', 'TOE', 'TOP LINE', 'WWWWWWWWWW', 'MMMMMMMMMM', 'mmmmmmmmmm', '0123456789', '<<<<>>>>', '&&&&', '%%%%@@@@',
-    '________________', 'ÆØÅ æøå ßü', 'Job: J-4417 Brinewell cooling loop · Piece: Spool 12-B', SHEET_CAUTION,
+    '________________', 'ÆØÅ æøå ßü', 'Job: J-4417 Brinewell cooling loop · Piece: Spool 12-B', CAUTION,
   ];
   for (const bold of [false, true]) {
     for (const s of samples) {

@@ -3,9 +3,9 @@
  * template goes on, how to print; then the calibration bar and the caution.
  */
 import type { INode } from 'svgson';
+import { CAUTION } from '@girth/unroll';
 import type { SheetUnits } from '../types.js';
 import { ASCENT_EM, CALIBRATION, CAP_HEIGHT_EM, DESCENT_EM, FONT_FAMILY, FONT_MM, INK, LINE_EM, TEXT_INSET_EM } from '../style.js';
-import { SHEET_CAUTION } from '../cautions.js';
 import { el, textElement } from '../internal/nodes.js';
 import type { NumberWriter } from '../internal/numbers.js';
 import { paperLinesData } from '../internal/path-data.js';
@@ -60,8 +60,8 @@ export function planTitleBlock(titleLines: readonly TitleLine[], units: SheetUni
   widthMm = Math.max(widthMm, barCaption.xMm + textWidthMm(captionText, captionFont));
   cursor += rowMm + ROW_GAP_MM;
   const cautionFont = FONT_MM.caution;
-  const caution = { text: SHEET_CAUTION, baselineMm: cursor + ASCENT_EM * cautionFont, fontMm: cautionFont };
-  widthMm = Math.max(widthMm, TEXT_INSET_EM * cautionFont + textWidthMm(SHEET_CAUTION, cautionFont, true));
+  const caution = { text: CAUTION, baselineMm: cursor + ASCENT_EM * cautionFont, fontMm: cautionFont };
+  widthMm = Math.max(widthMm, TEXT_INSET_EM * cautionFont + textWidthMm(CAUTION, cautionFont, true));
   cursor += LINE_EM * cautionFont;
   return { lines, bar: { topMm: barTop, lengthMm, heightMm }, barCaption, caution, widthMm, heightMm: cursor };
 }

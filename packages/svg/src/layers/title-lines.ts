@@ -7,7 +7,7 @@ import type { ResolvedSvgOptions } from '../types.js';
 import { FONT_MM } from '../style.js';
 import { textLines } from '../internal/safe-text.js';
 import { MM_PER_IN } from '../internal/numbers.js';
-import { PRINT_NOTE } from '../cautions.js';
+import { PRINT_NOTE } from '../print-note.js';
 
 /** One line of the title block. */
 export interface TitleLine {

@@ -1,14 +1,9 @@
 /**
- * The words on branch templates: titles, the notes of the title block, and
- * the caution every printed template carries.
+ * The words on branch templates: titles and the notes of the title block
+ * (the exporters add the caution, `CAUTION`).
  */
 import { FIT_CONTACT, type BranchGeometry, type ResolvedBranchSpec } from '@girth/geometry';
 import { formatAngleDeg, formatLengthMm } from '../internal/format-length.js';
-
-/** The caution printed on every branch template (hot work on pressure piping). */
-export const BRANCH_CAUTION =
-  'Caution: verify the template against the actual pipe before cutting; follow qualified cutting and welding procedures; ' +
-  'ASME B31.1/B31.3, local rules and licensed practice govern. Girth lays out geometry only and does not size reinforcement.';
 
 /**
  * The joint in one line: branch on header, angle, fit, and the offset and
@@ -32,7 +27,7 @@ function fitWords(s: ResolvedBranchSpec): string {
     : `branch ${FACE_WORD[s.contact.branch]} on header ${FACE_WORD[s.contact.header]}`;
 }
 
-/** Notes shared by both templates: the pipes, the joint, warnings, the caution. */
+/** Notes shared by both templates: the pipes and the joint. */
 function jointNotes(g: BranchGeometry): string[] {
   const s = g.spec;
   const pipe = (role: string, p: ResolvedBranchSpec['header']): string =>
@@ -47,12 +42,12 @@ function jointNotes(g: BranchGeometry): string[] {
 }
 
 function tail(g: BranchGeometry): string[] {
-  return [...g.warnings.map((w) => `Warning: ${w.message}`), BRANCH_CAUTION];
+  return g.warnings.map((w) => `Warning: ${w.message}`);
 }
 
 /**
  * Title and notes of the `branch-cut` template: pipes, joint, where station 1
- * goes, how cutback is measured, warnings and the caution.
+ * goes, how cutback is measured, and the warnings.
  * @param stretchOutMm π × branch OD, mm.
  * @example branchCutText(geometry, Math.PI * 168.275).title // "Branch cut: NPS 6 STD on NPS 12 STD, 45°, set-on"
  */
@@ -71,7 +66,7 @@ export function branchCutText(g: BranchGeometry, stretchOutMm: number): { title:
 
 /**
  * Title and notes of the `header-hole` template: pipes, joint, how girth and
- * axial are measured, which edge goes to the heel, warnings and the caution.
+ * axial are measured, which edge goes to the heel, and the warnings.
  * @example headerHoleText(geometry).title // "Header hole: NPS 6 STD on NPS 12 STD, 45°, set-on"
  */
 export function headerHoleText(g: BranchGeometry): { title: string; notes: string[] } {

@@ -4,7 +4,7 @@
  */
 import { sheetElement } from '@girth/geometry';
 import type { Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
-import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_CAUTION, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
+import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
 import { conePipes } from './internal/cone-pipes.js';
 import { arcExtremePoints, boundsOfPoints } from './internal/plate-frame.js';
 import { resolveCone } from './internal/resolve-cone.js';
@@ -120,7 +120,6 @@ export function layoutConcentricCone(spec: ConeSpec, options: ConeLayoutOptions 
       `Plate ${f(piece.widthMm)} x ${f(piece.heightMm)}; outer arc chord ${f(piece.outerChordMm)}, rise ${f(piece.outerRiseMm)}; ` +
         `inner arc chord ${f(piece.innerChordMm)}, rise ${f(piece.innerRiseMm)}; arc centre at (${f(center[0])}, ${f(center[1])}) from the plate corner.`,
       `${N} stations around the cone, every ${deg(360 / N)}; station 1 on the seam, numbers rising to the left (seen from outside); station lines are elements ${f(slant)} long.`,
-      CONE_CAUTION,
     ];
     const outerStart = at(pattern.outerRadius, startDeg);
     const outerEnd = at(pattern.outerRadius, endDeg);

@@ -4,7 +4,7 @@
  */
 import { frustumNormal, norm, sheetElement, sub, type ConeElement, type Vec3 } from '@girth/geometry';
 import type { PathPart, Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
-import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_CAUTION, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
+import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
 import { conePipes } from './internal/cone-pipes.js';
 import { boundsOfPoints, movePoint, toPlateOrigin, uprightRotation } from './internal/plate-frame.js';
 import { resolveCone, resolveEccentricOptions, type ResolvedCone } from './internal/resolve-cone.js';
@@ -230,7 +230,6 @@ function eccentricNotes(
       `to the next small-end station; true lengths in the table. Outline through ${x.m} sub-stations per station, ` +
       `within ${f(x.maxChordErrorMm)} of the true edge.`,
     `Plate ${f(piece.widthMm)} x ${f(piece.heightMm)}. Station 1 on the seam, numbers rising to the left (seen from outside).`,
-    CONE_CAUTION,
   ];
 }
 

@@ -3,7 +3,7 @@
  */
 import type { MiterCutList, MiterGeometry, MiterPieceCut, ResolvedMiterSpec } from '@girth/geometry';
 import { formatAngleDeg, formatLengthMm } from '../internal/format-length.js';
-import { CUT_CAUTION, fitSurfaceNote, pipeNote } from '../plane-cut/plane-cut-text.js';
+import { fitSurfaceNote, pipeNote } from '../plane-cut/plane-cut-text.js';
 
 /**
  * `NPS 12 STD, 90° in 4 pieces (3 welds), R 457.2 mm (18.000 in)`.
@@ -41,7 +41,6 @@ export function miterPieceText(
       fitSurfaceNote(s.fitSurface, 'the weld plane'),
       `Cut all pieces from one straight length of ${formatLengthMm(list.stock.lengthMm)} in order, no allowance for kerf; turn each next piece 180° about its axis before fitting.`,
       ...g.warnings.map((w) => `Warning: ${w.message}`),
-      CUT_CAUTION,
     ],
   };
 }

@@ -1,16 +1,9 @@
 /**
- * Words on plane-cut templates: title, notes and the caution.
+ * Words on plane-cut templates: title and notes (the exporters add the
+ * caution, `CAUTION`).
  */
 import type { CutFitSurface, PlaneCutGeometry, ResolvedPipeSection } from '@girth/geometry';
 import { formatAngleDeg, formatLengthMm } from '../internal/format-length.js';
-
-/**
- * The caution every plane-cut and miter template carries in its notes.
- * @example CUT_CAUTION.startsWith('Caution') // true
- */
-export const CUT_CAUTION =
-  'Caution: verify the template against the actual pipe before cutting; follow qualified cutting and welding procedures; ' +
-  'ASME B31.1/B31.3, local rules and licensed practice govern. Girth lays out geometry only and does not size reinforcement.';
 
 /**
  * One note line naming the pipe with its OD, wall and ID.
@@ -45,7 +38,6 @@ export function planeCutText(g: PlaneCutGeometry, stretchOutMm: number, centerCu
       `Cutback is measured from the square line (through the long point) back along the pipe; the pipe axis meets the cut ${formatLengthMm(centerCutbackMm)} back.`,
       fitSurfaceNote(g.fitSurface, 'the plane'),
       ...g.warnings.map((w) => `Warning: ${w.message}`),
-      CUT_CAUTION,
     ],
   };
 }

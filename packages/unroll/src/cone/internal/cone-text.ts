@@ -1,16 +1,9 @@
 /**
- * Words on reducer templates: titles, notes, the caution and warnings.
+ * Words on reducer templates: titles, notes and warnings (the exporters add
+ * the caution, `CAUTION`).
  */
 import type { GirthWarning } from '@girth/pipes';
 import type { ResolvedCone } from './resolve-cone.js';
-
-/**
- * The caution every reducer template carries in its notes.
- * @example CONE_CAUTION.startsWith('CAUTION') // true
- */
-export const CONE_CAUTION =
-  'CAUTION: verify against the actual pipe and plate before cutting; follow qualified procedures, ASME B31.1/B31.3, ' +
-  'local rules and licensed practice. Girth lays out geometry only and does not size reinforcement.';
 
 /** Cap height of the labels a cone pattern places itself (SEAM, FLAT SIDE), mm. */
 export const CONE_LABEL_HEIGHT_MM = 5;
