@@ -17,3 +17,4 @@ export * from './pipe/from-dimensions.js';
 export * from './pipe/schedule-name.js';
 export * from './pipe/resolve.js';
 export * from './pipe/schedules-for.js';
+export * from './length/format-both.js';

@@ -2,9 +2,8 @@
  * What a fitter or designer should know about a branch joint that does not
  * stop its layout.
  */
-import type { GirthWarning } from '@girth/pipes';
+import { type GirthWarning, formatLengthBoth } from '@girth/pipes';
 import { LENGTH_EPS_MM, SHALLOW_LATERAL_WARN_DEG } from '../tolerances.js';
-import { formatLengthMm } from '../internal/format-length.js';
 import type { ResolvedBranchSpec } from './types.js';
 
 /** Branches below this angle (degrees) fall outside ASME B31.3 para. 304.3.1(b) reinforcement rules (REFERENCES.md). */
@@ -43,7 +42,7 @@ export function branchWarnings(spec: ResolvedBranchSpec): readonly GirthWarning[
     out.push({
       code: 'REINFORCEMENT_RULES_OFFSET',
       field: 'offsetMm',
-      message: `ASME B31.3 para. 304.3.1(b) branch reinforcement rules cover branches whose axis meets the run axis; this one is offset ${formatLengthMm(spec.offsetMm)}. ${GEOMETRY_ONLY}`,
+      message: `ASME B31.3 para. 304.3.1(b) branch reinforcement rules cover branches whose axis meets the run axis; this one is offset ${formatLengthBoth(spec.offsetMm)}. ${GEOMETRY_ONLY}`,
     });
   }
   return out;

@@ -1,8 +1,7 @@
 /**
  * Checks a branch joint as given and fills in its defaults.
  */
-import { GirthError, requireFinite, requireNonNegative, requirePositive } from '@girth/pipes';
-import { formatLengthMm } from '../internal/format-length.js';
+import { GirthError, requireFinite, requireNonNegative, requirePositive, formatLengthBoth } from '@girth/pipes';
 import type { BranchContact, BranchFit, BranchPipeSection, BranchSpec, PipeFace, ResolvedBranchSpec } from './types.js';
 
 /** Default angle between branch and header axes: a tee, degrees. */
@@ -51,7 +50,7 @@ function resolvePipe(pipe: unknown, role: 'header' | 'branch'): BranchPipeSectio
     throw new GirthError(
       'WALL_TOO_THICK',
       `${role}.wallMm`,
-      `${role}.wallMm: a wall of ${formatLengthMm(wallMm)} leaves no bore in OD ${formatLengthMm(odMm)}; the wall must be less than ${formatLengthMm(odMm / 2)}`,
+      `${role}.wallMm: a wall of ${formatLengthBoth(wallMm)} leaves no bore in OD ${formatLengthBoth(odMm)}; the wall must be less than ${formatLengthBoth(odMm / 2)}`,
       p.wallMm,
     );
   }

@@ -2,11 +2,10 @@
  * A branch joint in 3D: which surfaces meet, the generator lines of the cut
  * and of the hole, and the kinks.
  */
-import { GirthError } from '@girth/pipes';
+import { GirthError, formatLengthBoth } from '@girth/pipes';
 import { TANGENCY_REL_EPS } from '../tolerances.js';
 import { offsetSurface } from '../surfaces/line-intersection.js';
 import type { CylinderSurface } from '../types.js';
-import { formatLengthMm } from '../internal/format-length.js';
 import { branchAxisDirection, branchBundle } from './branch-frame.js';
 import { branchWarnings } from './branch-warnings.js';
 import { grazingPhisRad } from './grazing-phis.js';
@@ -85,10 +84,10 @@ function faceRadius(pipe: BranchPipeSection, face: PipeFace): number {
 /** Throws unless a branch surface of radius `r` fits on a header surface of radius `hostR` at the spec's offset. */
 function checkFits(s: ResolvedBranchSpec, r: number, hostR: number, headerFace: PipeFace, gapMm: number): void {
   const slack = FLUSH_REL_SLACK * hostR;
-  const branchName = `branch ${s.contact.branch === 'inside' ? 'ID' : 'OD'} ${formatLengthMm(2 * r)}`;
+  const branchName = `branch ${s.contact.branch === 'inside' ? 'ID' : 'OD'} ${formatLengthBoth(2 * r)}`;
   const hostName =
     `header ${headerFace === 'inside' ? 'ID' : 'OD'}` +
-    (gapMm > 0 ? ` plus twice the root gap, ${formatLengthMm(2 * hostR)}` : ` ${formatLengthMm(2 * hostR)}`);
+    (gapMm > 0 ? ` plus twice the root gap, ${formatLengthBoth(2 * hostR)}` : ` ${formatLengthBoth(2 * hostR)}`);
   if (r > hostR + slack) {
     throw new GirthError('BRANCH_TOO_LARGE', 'branch', `branch: ${branchName} is larger than ${hostName}`, s.branch.odMm);
   }
@@ -97,8 +96,8 @@ function checkFits(s: ResolvedBranchSpec, r: number, hostR: number, headerFace: 
     throw new GirthError(
       'OFFSET_MISSES',
       'offsetMm',
-      `offsetMm: an offset of ${formatLengthMm(e)} takes the ${branchName} past the side of the ${hostName}; ` +
-        `the offset may be at most ${formatLengthMm(hostR - r)} (branch side flush with header side)`,
+      `offsetMm: an offset of ${formatLengthBoth(e)} takes the ${branchName} past the side of the ${hostName}; ` +
+        `the offset may be at most ${formatLengthBoth(hostR - r)} (branch side flush with header side)`,
       e,
     );
   }

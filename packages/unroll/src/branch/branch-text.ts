@@ -2,8 +2,8 @@
  * The words on branch templates: titles and the notes of the title block
  * (the exporters add the caution, `CAUTION`).
  */
+import { formatAngleDeg, formatLengthBoth } from '@girth/pipes';
 import { FIT_CONTACT, type BranchGeometry, type ResolvedBranchSpec } from '@girth/geometry';
-import { formatAngleDeg, formatLengthMm } from '../internal/format-length.js';
 
 /**
  * The joint in one line: branch on header, angle, fit, and the offset and
@@ -12,8 +12,8 @@ import { formatAngleDeg, formatLengthMm } from '../internal/format-length.js';
  */
 export function describeBranchJoint(s: ResolvedBranchSpec): string {
   const parts = [`${s.branch.label} on ${s.header.label}`, formatAngleDeg(s.angleDeg), fitWords(s)];
-  if (s.offsetMm !== 0) parts.push(`offset ${formatLengthMm(s.offsetMm)}`);
-  if (s.gapMm > 0) parts.push(`root gap ${formatLengthMm(s.gapMm)}`);
+  if (s.offsetMm !== 0) parts.push(`offset ${formatLengthBoth(s.offsetMm)}`);
+  if (s.gapMm > 0) parts.push(`root gap ${formatLengthBoth(s.gapMm)}`);
   return parts.join(', ');
 }
 
@@ -31,13 +31,13 @@ function fitWords(s: ResolvedBranchSpec): string {
 function jointNotes(g: BranchGeometry): string[] {
   const s = g.spec;
   const pipe = (role: string, p: ResolvedBranchSpec['header']): string =>
-    `${role} ${p.label}: OD ${formatLengthMm(p.odMm)}, wall ${formatLengthMm(p.wallMm)}, ID ${formatLengthMm(p.idMm)}.`;
+    `${role} ${p.label}: OD ${formatLengthBoth(p.odMm)}, wall ${formatLengthBoth(p.wallMm)}, ID ${formatLengthBoth(p.idMm)}.`;
   const offset =
-    s.offsetMm === 0 ? 'centred (axes meet)' : `axis offset ${formatLengthMm(s.offsetMm)}`;
+    s.offsetMm === 0 ? 'centred (axes meet)' : `axis offset ${formatLengthBoth(s.offsetMm)}`;
   return [
     pipe('Header', s.header),
     pipe('Branch', s.branch),
-    `Angle ${formatAngleDeg(s.angleDeg)} between branch and header axes; ${offset}; ${fitWords(s)}: branch ${FACE_WORD[s.contact.branch]} meets header ${FACE_WORD[s.contact.header]}; root gap ${formatLengthMm(s.gapMm)}.`,
+    `Angle ${formatAngleDeg(s.angleDeg)} between branch and header axes; ${offset}; ${fitWords(s)}: branch ${FACE_WORD[s.contact.branch]} meets header ${FACE_WORD[s.contact.header]}; root gap ${formatLengthBoth(s.gapMm)}.`,
   ];
 }
 
@@ -56,7 +56,7 @@ export function branchCutText(g: BranchGeometry, stretchOutMm: number): { title:
     title: `Branch cut: ${describeBranchJoint(g.spec)}`,
     notes: [
       ...jointNotes(g),
-      `Wrap on the branch OD; stretch-out ${formatLengthMm(stretchOutMm)}. Station 1 (HEEL) goes on the heel line: the branch generator on the obtuse side, in the plane of both axes; ` +
+      `Wrap on the branch OD; stretch-out ${formatLengthBoth(stretchOutMm)}. Station 1 (HEEL) goes on the heel line: the branch generator on the obtuse side, in the plane of both axes; ` +
         'stations run toward the side a positive offset moves the branch to, TOE at 180°.',
       'Cutback is measured from the square line (through the long point) back along the pipe. Cut radially on the line, then bevel.',
       ...tail(g),
