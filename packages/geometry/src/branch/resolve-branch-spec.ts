@@ -1,7 +1,8 @@
 /**
  * Checks a branch joint as given and fills in its defaults.
  */
-import { GirthError, requireFinite, requireNonNegative, requirePositive, formatLengthBoth } from '@girth/pipes';
+import { GirthError, requireFinite, requireNonNegative } from '@girth/pipes';
+import { resolvePipeSection } from '../pipe-section.js';
 import type { BranchContact, BranchFit, BranchPipeSection, BranchSpec, PipeFace, ResolvedBranchSpec } from './types.js';
 
 /** Default angle between branch and header axes: a tee, degrees. */
@@ -19,9 +20,10 @@ export const FIT_CONTACT: Readonly<Record<BranchFit, BranchContact>> = {
  * fit each other (see `solveBranch`).
  *
  * @throws GirthError `EMPTY_INPUT` (no spec, header or branch);
- *   `NOT_A_NUMBER` / `NOT_FINITE` naming the field; `NEGATIVE` for an OD or
- *   wall ≤ 0 or a negative `gapMm`; `WALL_TOO_THICK` when a wall is half the
- *   OD or more; `BAD_ANGLE` for `angleDeg` outside (0, 90]; `BAD_OPTION` for
+ *   `NOT_A_NUMBER` / `NOT_FINITE` naming the field; `NEGATIVE` for an OD,
+ *   wall or nominal size ≤ 0 or a negative `gapMm`; `WALL_TOO_THICK` when a
+ *   wall is half the OD or more (the pipe checks of `resolvePipeSection`, with
+ *   fields `header.*` and `branch.*`); `BAD_ANGLE` for `angleDeg` outside (0, 90]; `BAD_OPTION` for
  *   an unknown `fit` or `contact` or a label that is not text.
  * @example resolveBranchSpec({ header: { odMm: 323.85, wallMm: 9.525 }, branch: { odMm: 168.275, wallMm: 7.112 } }).fit // 'set-on'
  */
@@ -29,36 +31,14 @@ export function resolveBranchSpec(spec: BranchSpec): ResolvedBranchSpec {
   if (spec === null || typeof spec !== 'object') {
     throw new GirthError('EMPTY_INPUT', 'spec', 'spec: give the header, the branch and the joint', spec);
   }
-  const header = resolvePipe(spec.header, 'header');
-  const branch = resolvePipe(spec.branch, 'branch');
+  const header: BranchPipeSection = { ...resolvePipeSection(spec.header, 'header'), role: 'header' };
+  const branch: BranchPipeSection = { ...resolvePipeSection(spec.branch, 'branch'), role: 'branch' };
   const angleDeg = resolveAngle(spec.angleDeg);
   const offsetMm = spec.offsetMm === undefined ? 0 : requireFinite(spec.offsetMm, 'offsetMm');
   const fit = resolveFit(spec.fit);
   const contact = spec.contact === undefined ? FIT_CONTACT[fit] : resolveContact(spec.contact);
   const gapMm = spec.gapMm === undefined ? 0 : requireNonNegative(spec.gapMm, 'gapMm');
   return { kind: 'branch-spec', header, branch, angleDeg, offsetMm, fit, contact, gapMm };
-}
-
-function resolvePipe(pipe: unknown, role: 'header' | 'branch'): BranchPipeSection {
-  if (pipe === null || typeof pipe !== 'object') {
-    throw new GirthError('EMPTY_INPUT', role, `${role}: give the ${role} pipe's OD and wall`, pipe);
-  }
-  const p = pipe as { odMm?: unknown; wallMm?: unknown; label?: unknown };
-  const odMm = requirePositive(p.odMm, `${role}.odMm`);
-  const wallMm = requirePositive(p.wallMm, `${role}.wallMm`);
-  if (2 * wallMm >= odMm) {
-    throw new GirthError(
-      'WALL_TOO_THICK',
-      `${role}.wallMm`,
-      `${role}.wallMm: a wall of ${formatLengthBoth(wallMm)} leaves no bore in OD ${formatLengthBoth(odMm)}; the wall must be less than ${formatLengthBoth(odMm / 2)}`,
-      p.wallMm,
-    );
-  }
-  if (p.label !== undefined && typeof p.label !== 'string') {
-    throw new GirthError('BAD_OPTION', `${role}.label`, `${role}.label: expected text`, p.label);
-  }
-  const label = typeof p.label === 'string' && p.label.trim() !== '' ? p.label : `${odMm} mm OD x ${wallMm} mm wall`;
-  return { kind: 'branch-pipe', role, odMm, wallMm, idMm: odMm - 2 * wallMm, label };
 }
 
 function resolveAngle(value: unknown): number {

@@ -4,18 +4,9 @@
  * Lengths in mm, angles in degrees where a name says `Deg`, else radians.
  */
 import type { GirthWarning } from '@girth/pipes';
+import type { PipeSection, ResolvedPipeSection } from '../pipe-section.js';
 import type { GeneratorBundle, HostSurface } from '../types.js';
 import type { Vec3 } from '../vec3.js';
-
-/** A pipe as a branch joint needs it; the pipes package's `Pipe` fits it as it is. Lengths in mm. */
-export interface PipeSection {
-  /** Outside diameter, mm, > 0. */
-  readonly odMm: number;
-  /** Wall thickness, mm, > 0 and less than half the OD. */
-  readonly wallMm: number;
-  /** How the pipe is named on templates, e.g. `NPS 6 STD`. */
-  readonly label?: string;
-}
 
 /** How the branch sits on the header: set on its outside, or set into the hole down to the bore. */
 export type BranchFit = 'set-on' | 'set-in';
@@ -49,16 +40,9 @@ export interface BranchSpec {
   readonly gapMm?: number;
 }
 
-/** A checked pipe of a branch joint, with its ID and label. Lengths in mm. */
-export interface BranchPipeSection {
-  readonly kind: 'branch-pipe';
+/** A checked pipe of a branch joint (see `resolvePipeSection`) and which of the two it is. Lengths in mm. */
+export interface BranchPipeSection extends ResolvedPipeSection {
   readonly role: 'header' | 'branch';
-  readonly odMm: number;
-  readonly wallMm: number;
-  /** OD − 2 × wall, mm. */
-  readonly idMm: number;
-  /** The given label, or one made from OD and wall. */
-  readonly label: string;
 }
 
 /** A branch joint checked and with every default filled in. */

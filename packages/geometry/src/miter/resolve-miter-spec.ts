@@ -4,7 +4,7 @@
  */
 import { GirthError, requireFinite, requireInRange, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
 import { fitRadiusMm, type CutFitSurface } from '../plane-cut/fit-surface.js';
-import { resolvePipeSection, type ResolvedPipeSection } from '../plane-cut/pipe-section-input.js';
+import { resolvePipeSection, type ResolvedPipeSection } from '../pipe-section.js';
 import { MAX_MITER_WELDS } from './limits.js';
 import type { MiterSpec, ResolvedMiterSpec } from './types.js';
 

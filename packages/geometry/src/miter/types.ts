@@ -5,7 +5,7 @@
  */
 import type { GirthWarning } from '@girth/pipes';
 import type { CutFitSurface } from '../plane-cut/fit-surface.js';
-import type { PipeSectionInput, ResolvedPipeSection } from '../plane-cut/pipe-section-input.js';
+import type { PipeSection, ResolvedPipeSection } from '../pipe-section.js';
 import type { GeneratorBundle, PlaneSurface } from '../types.js';
 import type { Vec3 } from '../vec3.js';
 
@@ -15,7 +15,7 @@ import type { Vec3 } from '../vec3.js';
  * of `radiusMm` and `radiusNps`.
  */
 export interface MiterSpec {
-  readonly pipe: PipeSectionInput;
+  readonly pipe: PipeSection;
   /** Total change of direction, degrees, in (0, 180]. */
   readonly bendDeg: number;
   /** Number of welds (miter joints), a whole number ≥ 1. */

@@ -2,7 +2,7 @@
  * Which surface of the pipe is cut to meet the plane.
  */
 import { GirthError } from '@girth/pipes';
-import type { ResolvedPipeSection } from './pipe-section-input.js';
+import type { ResolvedPipeSection } from '../pipe-section.js';
 
 /**
  * The pipe surface whose generator lines are cut to meet the plane.

@@ -1,4 +1,3 @@
-export * from './pipe-section-input.js';
 export * from './fit-surface.js';
 export * from './types.js';
 export * from './limits.js';

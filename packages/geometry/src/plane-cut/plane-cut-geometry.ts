@@ -7,7 +7,7 @@ import type { GeneratorBundle, PlaneSurface } from '../types.js';
 import { addScaled, type Vec3 } from '../vec3.js';
 import { fitRadiusMm, type CutFitSurface } from './fit-surface.js';
 import { SHALLOW_PLANE_CUT_WARN_DEG } from './limits.js';
-import { resolvePipeSection } from './pipe-section-input.js';
+import { resolvePipeSection } from '../pipe-section.js';
 import type { PlaneCutGeometry, PlaneCutSpec } from './types.js';
 
 const AXIS: Vec3 = [1, 0, 0];

@@ -6,11 +6,11 @@ import type { GirthWarning } from '@girth/pipes';
 import type { Vec3 } from '../vec3.js';
 import type { GeneratorBundle, PlaneSurface } from '../types.js';
 import type { CutFitSurface } from './fit-surface.js';
-import type { PipeSectionInput, ResolvedPipeSection } from './pipe-section-input.js';
+import type { PipeSection, ResolvedPipeSection } from '../pipe-section.js';
 
 /** A pipe end cut to meet a plane (a cut-back to a flat surface). */
 export interface PlaneCutSpec {
-  readonly pipe: PipeSectionInput;
+  readonly pipe: PipeSection;
   /** Angle between the pipe axis and the plane, degrees, in (0, 90]; 90 is a square cut. */
   readonly angleDeg: number;
   /** Root gap left between the pipe end and the plane, measured square to the plane, mm, ≥ 0 (default 0). */

@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { isGirthError } from '@girth/pipes';
-import { resolvePipeSection } from './pipe-section-input.js';
-import { fitRadiusMm } from './fit-surface.js';
-import { expectClose } from './test-support/expect-close.js';
+import { resolvePipeSection } from './pipe-section.js';
+import { expectClose } from './internal/test-support/expect-close.js';
 
 function codeOf(f: () => unknown): string {
   try {
@@ -19,12 +18,15 @@ describe('resolvePipeSection', () => {
     // NPS 8 STD: OD 8.625 in, wall 0.322 in (ASME B36.10M, recalled, REFERENCES.md) -> ID 7.981 in.
     const p = resolvePipeSection({ odMm: 8.625 * 25.4, wallMm: 0.322 * 25.4, label: 'NPS 8 STD', npsIn: 8 });
     expectClose(p.idMm, 7.981 * 25.4, 1e-9, 'ID of NPS 8 STD');
+    expect(p.kind).toBe('pipe-section');
     expect(p.label).toBe('NPS 8 STD');
     expect(p.npsIn).toBe(8);
   });
 
-  it('names an unlabelled pipe by its OD and wall in mm', () => {
-    expect(resolvePipeSection({ odMm: 168.3, wallMm: 7.11 }).label).toBe('168.3 mm OD x 7.11 mm wall');
+  it('names an unlabelled pipe by its OD and wall in mm, and leaves out a nominal size not given', () => {
+    const p = resolvePipeSection({ odMm: 168.3, wallMm: 7.11 });
+    expect(p.label).toBe('168.3 mm OD x 7.11 mm wall');
+    expect('npsIn' in p).toBe(false);
   });
 
   it('rejects bad pipes with typed errors naming the field', () => {
@@ -36,13 +38,13 @@ describe('resolvePipeSection', () => {
     expect(codeOf(() => resolvePipeSection({ odMm: 100, wallMm: 5, npsIn: -1 }))).toBe('NEGATIVE:pipe.npsIn');
     expect(codeOf(() => resolvePipeSection({ odMm: 100, wallMm: 5, label: 7 as never }))).toBe('BAD_OPTION:pipe.label');
   });
-});
 
-describe('fitRadiusMm', () => {
-  it('takes the OD or the bore', () => {
-    const p = resolvePipeSection({ odMm: 100, wallMm: 5 });
-    expect(fitRadiusMm(p, 'od')).toBe(50);
-    expect(fitRadiusMm(p, 'id')).toBe(45);
-    expect(codeOf(() => fitRadiusMm(p, 'mid' as never))).toBe('BAD_OPTION:fitSurface');
+  it('names the field it is given (header, branch) and states the wall limit in both units', () => {
+    expect(codeOf(() => resolvePipeSection(null as never, 'header'))).toBe('EMPTY_INPUT:header');
+    expect(codeOf(() => resolvePipeSection({ odMm: 'x' as never, wallMm: 5 }, 'branch'))).toBe('NOT_A_NUMBER:branch.odMm');
+    // 1 in = 25.4 mm by definition (NIST SP 811; common practice): a 2 in OD allows a wall below 1 in.
+    expect(() => resolvePipeSection({ odMm: 50.8, wallMm: 25.4 }, 'branch')).toThrow(
+      'branch.wallMm: a wall of 25.4 mm (1.000 in) leaves no bore in OD 50.8 mm (2.000 in); the wall must be less than 25.4 mm (1.000 in)',
+    );
   });
 });
