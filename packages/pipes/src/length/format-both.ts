@@ -4,18 +4,8 @@
  * reads either, e.g. `387.4 mm (15.250 in)`. Station tables and printed
  * lengths in the job's unit are written by {@link formatLength}.
  */
+import { toFixedHalfAway as fixedHalfAway } from './decimal.js';
 import { MM_PER_INCH } from './units.js';
-
-/**
- * `value` to `decimals` places, rounding half away from zero after a nudge of
- * one part in 10^12, so a decimal tie stored a hair below itself still rounds
- * up (12.75 in = 323.84999999999997 mm reads 323.9). A value that rounds to
- * zero has no minus sign.
- */
-function fixedHalfAway(value: number, decimals: number): string {
-  const k = 10 ** decimals;
-  return ((Math.round(Math.abs(value) * k * (1 + 1e-12)) / k) * Math.sign(value)).toFixed(decimals);
-}
 
 /**
  * A length in millimetres written in both units: mm to 0.1, then inches to

@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { GirthError } from '../errors.js';
 import { formatLength } from './format.js';
+import { formatLengthBoth } from './format-both.js';
 import { roundToFraction } from './fraction.js';
 import { parseLength } from './parse.js';
 import { MM_PER_INCH } from './units.js';
@@ -162,5 +163,18 @@ describe('formatLength: round trips (fast-check)', () => {
     const text = formatLength(950501.6732500001, { format: 'mm', decimals: 4 });
     expect(text).toBe('950501.6733 mm');
     expect(nearInteger(parseLength(text) / 1e-4)).toBe(true);
+  });
+});
+
+describe('decimal ties', () => {
+  it('rounds an exact decimal tie half away from zero, like the notes do', () => {
+    // NPS 12 OD 12.750 in (ASME B36.10M, recalled) is exactly 323.85 mm (1 in = 25.4 mm by definition);
+    // the double for it sits just below the tie, and a table must still read 323.9 like the notes.
+    const od = 12.75 * MM_PER_INCH;
+    expect(formatLength(od, { format: 'mm' })).toBe('323.9 mm');
+    expect(formatLengthBoth(od)).toBe('323.9 mm (12.750 in)');
+    expect(formatLength(-od, { format: 'mm' })).toBe('-323.9 mm');
+    // 0.0625 in (1/16 in) to three decimals: a tie of the decimal-inch format.
+    expect(formatLength(0.0625 * MM_PER_INCH, { format: 'in' })).toBe('0.063"');
   });
 });

@@ -2,6 +2,7 @@
  * Writing lengths out for people: decimal millimetres, decimal inches, or
  * feet-inch-fractions. This is the only place Girth rounds a length.
  */
+import { toFixedHalfAway } from './decimal.js';
 import { GirthError } from '../errors.js';
 import { requireFinite } from '../validate.js';
 import { feetInchParts, requireFractionDenominator, type FractionDenominator } from './fraction.js';
@@ -26,11 +27,8 @@ function requireDecimals(value: unknown): number {
   throw new GirthError('BAD_OPTION', 'decimals', `decimals: must be a whole number from 0 to 6, got ${String(value)}`, value);
 }
 
-/** `value.toFixed(decimals)` without a minus sign on a value that rounds to zero. */
-function fixed(value: number, decimals: number): string {
-  const text = value.toFixed(decimals);
-  return /^-0(?:\.0*)?$/.test(text) ? text.slice(1) : text;
-}
+/** `value` to `decimals` places, half away from zero, never `-0`. */
+const fixed = toFixedHalfAway;
 
 /**
  * Writes a length for people, rounding it to the format's resolution.
