@@ -6,7 +6,7 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { TABLE_CAUTION } from '@girth/table';
+import { CAUTION } from '@girth/unroll';
 import { expectClose } from './test-support/close.js';
 import { BIN_PATH, CLI_PACKAGE_DIR, DEMO_JOB, DIST_MAIN } from './test-support/paths.js';
 import { closedPolylines, extents, readDxf, readSvgSheet, svgText } from './test-support/read-back.js';
@@ -100,7 +100,7 @@ describe('girth run on the demo job', () => {
       expect(summary.split('\n').some((l) => l.startsWith(piece)), `summary row for ${piece}`).toBe(true);
       expect(summary).toContain(`== ${piece} ==`);
     }
-    expect(summary.trimEnd().endsWith(TABLE_CAUTION)).toBe(true);
+    expect(summary.trimEnd().endsWith(CAUTION)).toBe(true);
   });
 
   it('every SVG parses with svgson, sized in inches (the job\'s unit) equal to its viewBox, with a caution', () => {
@@ -195,7 +195,7 @@ describe('girth exit codes', () => {
       expect(bad.out).toBe('');
       const table = girth(['cutback', '--pipe', 'NPS 6 STD', '--angle', '60'], dir);
       expect(table.code, table.err).toBe(0);
-      expect(table.out).toContain(TABLE_CAUTION);
+      expect(table.out).toContain(CAUTION);
       const help = girth(['--help'], dir);
       expect(help.code).toBe(0);
       expect(help.out).toContain('Usage: girth');

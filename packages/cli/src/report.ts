@@ -3,8 +3,8 @@
  * (miter cut list, cone pattern), or the JSON result contract.
  */
 import { formatLength, MM_PER_INCH, type LengthUnit } from '@girth/pipes';
-import { formatStationTable, TABLE_CAUTION, toResultJson, type ResultJson, type TableLengthFormat } from '@girth/table';
-import type { ConeLayout, LayoutResult, MiterLayout } from '@girth/unroll';
+import { CAUTION, type ConeLayout, type LayoutResult, type MiterLayout } from '@girth/unroll';
+import { formatStationTable, toResultJson, type ResultJson, type TableLengthFormat } from '@girth/table';
 
 /** How lengths are printed. */
 export interface ReportStyle {
@@ -65,7 +65,7 @@ function miterLines(result: MiterLayout, L: (mm: number) => string): string[] {
 }
 
 /** The caution printed once at the end of every report. */
-export const REPORT_CAUTION = TABLE_CAUTION;
+export const REPORT_CAUTION = CAUTION;
 
 /**
  * The JSON result contract (DESIGN.md) with each joint's own figures in the

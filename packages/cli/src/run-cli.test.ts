@@ -7,7 +7,8 @@ import { readFileSync, writeFileSync, mkdirSync, existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { MM_PER_INCH, resolvePipe } from '@girth/pipes';
-import { TABLE_CAUTION, toResultJson } from '@girth/table';
+import { toResultJson } from '@girth/table';
+import { CAUTION } from '@girth/unroll';
 import { layoutBranch } from '@girth/unroll';
 import { GIRTH_VERSION } from './run-cli.js';
 import { JOINT_COMMANDS } from './commands/joint-commands.js';
@@ -79,7 +80,7 @@ describe('a branch without outputs', () => {
     expect(run.code, run.err).toBe(0);
     expect(run.out).toContain('Branch cut: NPS 6 STD on NPS 12 STD');
     expect(run.out).toContain('Header hole: NPS 6 STD on NPS 12 STD');
-    expect(run.out).toContain(TABLE_CAUTION);
+    expect(run.out).toContain(CAUTION);
     // Two tables of 16 stations (16 equal stations of 22.5°: common practice).
     const rows = run.out.split('\n').filter((l) => /^\s+\d+\s+\d+\.\d\s/.test(l));
     expect(rows).toHaveLength(32);
@@ -99,7 +100,7 @@ describe('a branch without outputs', () => {
     expect(mm.code, mm.err).toBe(0);
     // 0.767454 in × 25.4 = 19.49 mm
     expect(mm.out).toMatch(/^\s+1\s+0\.0\s+0(\.0+)?( ?mm)?\s+19\.[45]\d*( ?mm)?\s*$/m);
-    expect(mm.out).toContain(TABLE_CAUTION);
+    expect(mm.out).toContain(CAUTION);
   });
 
   it('--version prints the version', async () => {
@@ -192,7 +193,7 @@ describe('--json is the library result contract', () => {
     const run = await runCaptured([...TEE, '--json']);
     expect(run.code).toBe(0);
     expect(() => JSON.parse(run.out) as unknown).not.toThrow();
-    expect(run.err).toContain(TABLE_CAUTION);
+    expect(run.err).toContain(CAUTION);
   });
 });
 
@@ -370,7 +371,7 @@ describe('existing output files', () => {
     expect(forced.code, forced.err).toBe(0);
     expect(readFileSync(path, 'utf8')).toMatch(/^<\?xml[\s\S]*<svg /);
     expect(forced.err).toContain(`wrote ${path}`);
-    expect(forced.err).toContain(TABLE_CAUTION);
+    expect(forced.err).toContain(CAUTION);
     expect(listFiles(tmp)).toEqual(['vent.svg']);
   });
 

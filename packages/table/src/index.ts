@@ -1,5 +1,4 @@
 export * from './types.js';
-export * from './caution.js';
 export * from './format-station-table.js';
 export * from './station-table-csv.js';
 export * from './result-json.js';

@@ -7,7 +7,8 @@ import { mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { GirthError, MM_PER_INCH, resolvePipe } from '@girth/pipes';
-import { TABLE_CAUTION, toResultJson } from '@girth/table';
+import { toResultJson } from '@girth/table';
+import { CAUTION } from '@girth/unroll';
 import { layoutBranch } from '@girth/unroll';
 import { parseJob } from './schema.js';
 import { pieceStem, planJob } from './run-job.js';
@@ -83,7 +84,7 @@ describe('planJob on the demo job', () => {
       expect(lines.some((l) => l.startsWith(piece) && l.includes(result.kind) && l.includes(result.templates.map((t) => t.id).join(', '))), piece).toBe(true);
       expect(plan.summary).toContain(`== ${piece} ==`);
     }
-    expect(plan.summary.trimEnd().endsWith(TABLE_CAUTION)).toBe(true);
+    expect(plan.summary.trimEnd().endsWith(CAUTION)).toBe(true);
     const summaryFile = plan.files.find((f) => f.path === join('out', 'summary.txt'));
     expect(summaryFile?.content).toBe(plan.summary);
   });

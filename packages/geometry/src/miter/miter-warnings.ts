@@ -22,7 +22,7 @@ export function miterWarnings(spec: ResolvedMiterSpec): readonly GirthWarning[] 
     warnings.push({
       code: 'MITER_CUT_ANGLE_OVER_LIMIT',
       field: 'welds',
-      message: `welds: each cut leans ${round(spec.cutAngleDeg)}°; ASME B31.3 para. 304.2.3 allows at most 22.5° for multiple miters: use at least ${Math.ceil(spec.bendDeg / (2 * B31_3_MULTIPLE_MITER_MAX_CUT_DEG) - 1e-9)} welds`,
+      message: `each cut leans ${round(spec.cutAngleDeg)}°; ASME B31.3 para. 304.2.3 allows at most 22.5° for multiple miters: use at least ${Math.ceil(spec.bendDeg / (2 * B31_3_MULTIPLE_MITER_MAX_CUT_DEG) - 1e-9)} welds`,
     });
   }
   const minR = codeMinMiterRadiusMm(spec.pipe.odMm, spec.pipe.wallMm, spec.cutAngleDeg);
@@ -30,7 +30,7 @@ export function miterWarnings(spec: ResolvedMiterSpec): readonly GirthWarning[] 
     warnings.push({
       code: 'MITER_RADIUS_BELOW_MIN',
       field: 'radiusMm',
-      message: `radiusMm: a centreline radius of ${round(spec.radiusMm)} mm is below ${round(minR)} mm, the least ASME B31.3 eq. (5) allows for a ${round(spec.pipe.wallMm)} mm wall at a ${round(spec.cutAngleDeg)}° cut (as recalled; check the code)`,
+      message: `a centreline radius of ${round(spec.radiusMm)} mm is below ${round(minR)} mm, the least ASME B31.3 eq. (5) allows for a ${round(spec.pipe.wallMm)} mm wall at a ${round(spec.cutAngleDeg)}° cut (as recalled; check the code)`,
     });
   }
   return warnings;

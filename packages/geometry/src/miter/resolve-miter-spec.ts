@@ -2,14 +2,12 @@
  * Checks a miter spec and resolves its choices (welds or pieces, radius in mm
  * or in nominal sizes).
  */
-import { GirthError, requireFinite, requireInRange, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
+import { GirthError, MM_PER_INCH as MM_PER_IN, requireFinite, requireInRange, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
 import { fitRadiusMm, type CutFitSurface } from '../plane-cut/fit-surface.js';
 import { resolvePipeSection, type ResolvedPipeSection } from '../pipe-section.js';
 import { MAX_MITER_WELDS } from './limits.js';
 import type { MiterSpec, ResolvedMiterSpec } from './types.js';
 
-/** Millimetres in one inch (exact by definition). */
-const MM_PER_IN = 25.4;
 
 /**
  * Checks a {@link MiterSpec} and resolves it: the number of welds, the cut
@@ -78,10 +76,10 @@ function resolveRadiusMm(spec: MiterSpec, pipe: ResolvedPipeSection): number {
   const hasMm = spec.radiusMm !== undefined;
   const hasNps = spec.radiusNps !== undefined;
   if (hasMm && hasNps) {
-    throw new GirthError('BAD_OPTION', 'radiusNps', 'radiusNps: give the centreline radius in mm or as a multiple of the nominal size, not both', spec.radiusNps);
+    throw new GirthError('BAD_OPTION', 'radiusNps', 'radiusNps: give the centreline radius as a length or as a multiple of the nominal size, not both', spec.radiusNps);
   }
   if (!hasMm && !hasNps) {
-    throw new GirthError('BAD_OPTION', 'radiusMm', 'radiusMm: give the centreline radius (radiusMm, or radiusNps with the nominal size)');
+    throw new GirthError('BAD_OPTION', 'radiusMm', 'radiusMm: give the centreline radius, as a length or as a multiple of the nominal pipe size');
   }
   if (hasMm) {
     const r = requireFinite(spec.radiusMm, 'radiusMm');

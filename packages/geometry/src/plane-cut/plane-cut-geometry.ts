@@ -51,7 +51,7 @@ export function planeCutGeometry(spec: PlaneCutSpec): PlaneCutGeometry {
     warnings.push({
       code: 'SHALLOW_PLANE_CUT',
       field: 'angleDeg',
-      message: `angleDeg: a cut at ${angleDeg}° to the plane runs out into a feather edge ${(1 / Math.tan(angleRad)).toFixed(1)} diameters long; check it can be cut, fitted and welded`,
+      message: `a cut at ${angleDeg}° to the plane runs out into a feather edge ${(1 / Math.tan(angleRad)).toFixed(1)} diameters long; check it can be cut, fitted and welded`,
     });
   }
 
