@@ -44,6 +44,9 @@ export function layoutReportText(result: LayoutResult, style: ReportStyle, headi
       `Pattern: outer radius ${L(p.outerRadius)}, inner radius ${L(p.innerRadius)}, sweep ${p.sweepDeg.toFixed(2)} deg, slant height ${L(p.slantHeight)}`,
     );
   }
+  if (isCone(result)) {
+    for (const piece of result.pieces) out.push(`Plate for ${piece.templateId}: at least ${L(piece.widthMm)} x ${L(piece.heightMm)} (the pattern's bounding rectangle)`);
+  }
   for (const template of result.templates) out.push('', formatStationTable(template, { format: style.tableFormat, fraction: style.fraction, caution: false }).trimEnd());
   return out.join('\n') + '\n';
 }
