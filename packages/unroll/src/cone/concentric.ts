@@ -4,8 +4,8 @@
  */
 import { sheetElement } from '@girth/geometry';
 import type { Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
-import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
-import { conePipes } from './internal/cone-pipes.js';
+import { coneTitle, commonConeNotes, deg, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
+import { coneResultBase } from './internal/cone-result.js';
 import { arcExtremePoints, boundsOfPoints } from './internal/plate-frame.js';
 import { resolveCone } from './internal/resolve-cone.js';
 import type { ConcentricConeLayout, ConcentricConePiece, ConeLayoutOptions, ConePattern, ConeSpec } from './types.js';
@@ -149,23 +149,9 @@ export function layoutConcentricCone(spec: ConeSpec, options: ConeLayoutOptions 
   }
 
   return {
-    kind: 'reducer',
+    ...coneResultBase(cone, N, k, { large: 2 * Math.PI * meanR, small: 2 * Math.PI * meanr }, templates),
     form: 'concentric',
-    diametersAt: cone.diametersAt,
-    thicknessMm: cone.thicknessMm,
-    lengthMm: cone.lengthMm,
-    apexAngleDeg: cone.apexAngleDeg,
-    maxInclinationDeg: cone.maxInclinationDeg,
-    stationCount: N,
-    segmentCount: k,
-    ends: {
-      large: { givenDiameterMm: cone.largeDiameterMm, meanGirthMm: 2 * Math.PI * meanR },
-      small: { givenDiameterMm: cone.smallDiameterMm, meanGirthMm: 2 * Math.PI * meanr },
-    },
     pattern,
     pieces,
-    templates,
-    pipes: conePipes(cone),
-    warnings: coneWarnings(cone),
   };
 }

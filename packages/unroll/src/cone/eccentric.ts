@@ -4,8 +4,8 @@
  */
 import { frustumNormal, norm, sheetElement, sub, type ConeElement, type Vec3 } from '@girth/geometry';
 import type { PathPart, Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
-import { coneWarnings, coneTitle, commonConeNotes, deg, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
-import { conePipes } from './internal/cone-pipes.js';
+import { coneTitle, commonConeNotes, deg, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
+import { coneResultBase } from './internal/cone-result.js';
 import { boundsOfPoints, movePoint, toPlateOrigin, uprightRotation } from './internal/plate-frame.js';
 import { resolveCone, resolveEccentricOptions, type ResolvedCone } from './internal/resolve-cone.js';
 import { subStationsPerStation } from './internal/sub-stations.js';
@@ -184,25 +184,11 @@ export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricC
   });
 
   return {
-    kind: 'reducer',
+    ...coneResultBase(cone, N, k, { large: largeGirth, small: smallGirth }, templates),
     form: 'eccentric',
-    diametersAt: cone.diametersAt,
-    thicknessMm: cone.thicknessMm,
-    lengthMm: cone.lengthMm,
-    apexAngleDeg: cone.apexAngleDeg,
-    maxInclinationDeg: cone.maxInclinationDeg,
-    stationCount: N,
-    segmentCount: k,
-    ends: {
-      large: { givenDiameterMm: cone.largeDiameterMm, meanGirthMm: largeGirth },
-      small: { givenDiameterMm: cone.smallDiameterMm, meanGirthMm: smallGirth },
-    },
     seam,
     pieces,
     outline: { chordToleranceMm, subStationsPerStation: m, maxChordErrorMm },
-    templates,
-    pipes: conePipes(cone),
-    warnings: coneWarnings(cone),
   };
 }
 
