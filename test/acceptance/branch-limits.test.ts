@@ -6,6 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { isGirthError } from '@girth/pipes';
+import { girthErrorOf } from '@girth/pipes/test-support';
 import { layoutBranch } from '@girth/unroll';
 import { exactBranchStations, exactHoleStations, exactLongPoint, type OracleBranchSpec } from '../oracle/index.js';
 import { expectClose } from '../support/expect-close.js';
@@ -18,15 +19,6 @@ const NPS6_STD = { odMm: 6.625 * IN, wallMm: 0.28 * IN };
 const R = NPS12_STD.odMm / 2;
 /** Set-on: the branch ID side is flush with the header OD side when the offset is R - r_ID (first principles). */
 const FLUSH_OFFSET_MM = R - (NPS6_STD.odMm / 2 - NPS6_STD.wallMm);
-
-function thrown(f: () => unknown): unknown {
-  try {
-    f();
-  } catch (err) {
-    return err;
-  }
-  return undefined;
-}
 
 function compareWithOracle(spec: OracleBranchSpec, tolMm: number, label: string): void {
   const result = layoutBranch(spec, { stations: 16 });
@@ -56,7 +48,7 @@ describe('tangency: the flush offset and a set-in branch as large as the header 
   });
 
   it('1 µm past the flush limit is refused: GirthError OFFSET_MISSES on offsetMm', () => {
-    const err = thrown(() => layoutBranch({ header: NPS12_STD, branch: NPS6_STD, offsetMm: FLUSH_OFFSET_MM + 1e-3 }));
+    const err = girthErrorOf(() => layoutBranch({ header: NPS12_STD, branch: NPS6_STD, offsetMm: FLUSH_OFFSET_MM + 1e-3 }));
     expect(isGirthError(err, 'OFFSET_MISSES')).toBe(true);
     expect(isGirthError(err) && err.field).toBe('offsetMm');
   });
@@ -74,7 +66,7 @@ describe('bad input gets a typed error naming the field (DESIGN.md: typed errors
   ];
   for (const c of cases) {
     it(`${c.name}: GirthError with a code and a field`, () => {
-      const err = thrown(c.run);
+      const err = girthErrorOf(c.run);
       expect(isGirthError(err), `expected a GirthError, got ${String(err)}`).toBe(true);
       if (isGirthError(err)) {
         expect(err.code.length).toBeGreaterThan(0);

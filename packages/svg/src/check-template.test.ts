@@ -1,19 +1,9 @@
 import { describe, expect, test } from 'vitest';
-import { GirthError } from '@girth/pipes';
+import { girthErrorOf } from '@girth/pipes/test-support';
 import type { PathPart, Point2, Template } from '@girth/unroll';
 import { arcSweepDeg, checkTemplate } from './check-template.js';
 import { templateToSvg } from './template-to-svg.js';
 import { coneSector, planeCutWrap, teeHole } from './test-support/fixtures.js';
-
-function girthError(f: () => unknown): GirthError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof GirthError) return e;
-    throw e;
-  }
-  throw new Error('expected a GirthError');
-}
 
 const wrap = planeCutWrap(114.3, 30);
 
@@ -29,49 +19,49 @@ describe('checkTemplate', () => {
   });
 
   test('a NaN coordinate is refused with its field path, and no SVG is made', () => {
-    const e = girthError(() => templateToSvg(withPoint(wrap, 14, [10, NaN])));
+    const e = girthErrorOf(() => templateToSvg(withPoint(wrap, 14, [10, NaN])));
     expect(e.code).toBe('NOT_A_NUMBER');
     expect(e.field).toBe('template.cut[0].points[14][1]');
   });
 
   test('an infinite coordinate is refused', () => {
-    const e = girthError(() => checkTemplate(withPoint(wrap, 3, [Infinity, 0])));
+    const e = girthErrorOf(() => checkTemplate(withPoint(wrap, 3, [Infinity, 0])));
     expect(e.code).toBe('NOT_FINITE');
     expect(e.field).toBe('template.cut[0].points[3][0]');
   });
 
   test('a coordinate beyond 1 km is refused', () => {
-    const e = girthError(() => checkTemplate(withPoint(wrap, 0, [0, 2e6])));
+    const e = girthErrorOf(() => checkTemplate(withPoint(wrap, 0, [0, 2e6])));
     expect(e.code).toBe('OUT_OF_RANGE');
   });
 
   test('bad station lines, labels and marks are refused with their field', () => {
     const s = wrap.stationLines[2]!;
-    expect(girthError(() => checkTemplate({ ...wrap, stationLines: [{ ...s, to: [NaN, 0] }] })).field).toBe(
+    expect(girthErrorOf(() => checkTemplate({ ...wrap, stationLines: [{ ...s, to: [NaN, 0] }] })).field).toBe(
       'template.stationLines[0].to[0]',
     );
-    expect(girthError(() => checkTemplate({ ...wrap, labels: [{ text: 'A', at: [0, 0], heightMm: 0 }] })).code).toBe('NEGATIVE');
+    expect(girthErrorOf(() => checkTemplate({ ...wrap, labels: [{ text: 'A', at: [0, 0], heightMm: 0 }] })).code).toBe('NEGATIVE');
     expect(
-      girthError(() => checkTemplate({ ...wrap, marks: [{ kind: 'segment', from: [0, 0], to: [0, -Infinity] }] })).field,
+      girthErrorOf(() => checkTemplate({ ...wrap, marks: [{ kind: 'segment', from: [0, 0], to: [0, -Infinity] }] })).field,
     ).toBe('template.marks[0].to[1]');
   });
 
   test('arcs need a positive radius and a sweep', () => {
     const arc = { kind: 'arc' as const, center: [0, 0] as const, radiusMm: 10, startDeg: 30, endDeg: 30 };
-    expect(girthError(() => checkTemplate({ ...wrap, cut: [arc] })).code).toBe('OUT_OF_RANGE');
-    expect(girthError(() => checkTemplate({ ...wrap, cut: [{ ...arc, endDeg: 40, radiusMm: -1 }] })).code).toBe('NEGATIVE');
+    expect(girthErrorOf(() => checkTemplate({ ...wrap, cut: [arc] })).code).toBe('OUT_OF_RANGE');
+    expect(girthErrorOf(() => checkTemplate({ ...wrap, cut: [{ ...arc, endDeg: 40, radiusMm: -1 }] })).code).toBe('NEGATIVE');
   });
 
   test('a template with nothing to cut, or a wrap without its stretch-out, is refused', () => {
-    expect(girthError(() => checkTemplate({ ...wrap, cut: [] })).code).toBe('EMPTY_INPUT');
+    expect(girthErrorOf(() => checkTemplate({ ...wrap, cut: [] })).code).toBe('EMPTY_INPUT');
     const { stretchOutMm: _s, ...noStretch } = wrap;
-    const e = girthError(() => checkTemplate(noStretch));
+    const e = girthErrorOf(() => checkTemplate(noStretch));
     expect(e.code).toBe('EMPTY_INPUT');
     expect(e.field).toBe('template.stretchOutMm');
   });
 
   test('a polyline needs two points', () => {
-    const e = girthError(() => checkTemplate({ ...wrap, cut: [{ kind: 'polyline', points: [[0, 0]], closed: false }] }));
+    const e = girthErrorOf(() => checkTemplate({ ...wrap, cut: [{ kind: 'polyline', points: [[0, 0]], closed: false }] }));
     expect(e.field).toBe('template.cut[0].points');
   });
 });

@@ -1,19 +1,9 @@
 import { describe, expect, test } from 'vitest';
-import { GirthError } from '@girth/pipes';
+import { girthErrorOf } from '@girth/pipes/test-support';
 import { resolveSvgOptions } from './options.js';
 import { templateToSvg } from './template-to-svg.js';
 import { planeCutWrap } from './test-support/fixtures.js';
 import type { SvgOptions } from './types.js';
-
-function girthError(f: () => unknown): GirthError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof GirthError) return e;
-    throw e;
-  }
-  throw new Error('expected a GirthError');
-}
 
 describe('resolveSvgOptions', () => {
   test('defaults: mm sheet, 10 mm margin, 25 mm overlap, no job or piece', () => {
@@ -38,7 +28,7 @@ describe('resolveSvgOptions', () => {
   ];
   for (const [name, options, field, code] of bad) {
     test(`${name}: GirthError ${code} on ${field}`, () => {
-      const e = girthError(() => resolveSvgOptions(options));
+      const e = girthErrorOf(() => resolveSvgOptions(options));
       expect(e.code).toBe(code);
       expect(e.field).toBe(field);
       expect(e.message).toContain(field);
@@ -46,12 +36,12 @@ describe('resolveSvgOptions', () => {
   }
 
   test('the message names the limit', () => {
-    expect(girthError(() => resolveSvgOptions({ overlapMm: 250 })).message).toMatch(/\[0, 200\] mm/);
-    expect(girthError(() => resolveSvgOptions({ piece: 'x'.repeat(300) })).message).toMatch(/200 characters/);
+    expect(girthErrorOf(() => resolveSvgOptions({ overlapMm: 250 })).message).toMatch(/\[0, 200\] mm/);
+    expect(girthErrorOf(() => resolveSvgOptions({ piece: 'x'.repeat(300) })).message).toMatch(/200 characters/);
   });
 
   test('templateToSvg checks its options the same way, before drawing anything', () => {
-    const e = girthError(() => templateToSvg(planeCutWrap(100, 30), { overlapMm: -5 }));
+    const e = girthErrorOf(() => templateToSvg(planeCutWrap(100, 30), { overlapMm: -5 }));
     expect(e.code).toBe('OUT_OF_RANGE');
     expect(e.field).toBe('overlapMm');
   });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { isGirthError } from '@girth/pipes';
+import { expectGirthError } from '@girth/pipes/test-support';
 import { resolveMiterSpec } from './resolve-miter-spec.js';
 import { miterWarnings } from './miter-warnings.js';
 import type { MiterSpec } from './types.js';
@@ -8,16 +8,6 @@ import { expectClose } from '../plane-cut/test-support/expect-close.js';
 // NPS 12 STD, ASME B36.10M (recalled, REFERENCES.md): OD 12.750 in, wall 0.375 in.
 const NPS12_STD = { odMm: 12.75 * 25.4, wallMm: 0.375 * 25.4, label: 'NPS 12 STD', npsIn: 12 };
 const BASE: MiterSpec = { pipe: NPS12_STD, bendDeg: 90, welds: 3, radiusMm: 457.2 };
-
-function codeOf(spec: MiterSpec): string {
-  try {
-    resolveMiterSpec(spec);
-  } catch (e) {
-    if (isGirthError(e)) return `${e.code}:${e.field}`;
-    throw e;
-  }
-  return 'no error';
-}
 
 describe('resolveMiterSpec', () => {
   it('resolves pieces to welds + 1 and the cut angle (ASME B31.3 para. 304.2.3 via REFERENCES.md)', () => {
@@ -35,29 +25,29 @@ describe('resolveMiterSpec', () => {
   });
 
   it('rejects bad input with the field and a stable code', () => {
-    expect(codeOf({ ...BASE, welds: 0 })).toBe('OUT_OF_RANGE:welds');
-    expect(codeOf({ ...BASE, welds: undefined, pieces: 0 })).toBe('OUT_OF_RANGE:pieces');
-    expect(codeOf({ ...BASE, welds: undefined, pieces: 1 })).toBe('OUT_OF_RANGE:pieces');
-    expect(codeOf({ ...BASE, welds: 2.5 })).toBe('OUT_OF_RANGE:welds');
-    expect(codeOf({ ...BASE, welds: 3, pieces: 4 })).toBe('BAD_OPTION:pieces');
-    expect(codeOf({ ...BASE, welds: undefined })).toBe('BAD_OPTION:welds');
-    expect(codeOf({ ...BASE, bendDeg: 0 })).toBe('OUT_OF_RANGE:bendDeg');
-    expect(codeOf({ ...BASE, bendDeg: 180.5 })).toBe('OUT_OF_RANGE:bendDeg');
-    expect(codeOf({ ...BASE, bendDeg: Number.NaN })).toBe('NOT_A_NUMBER:bendDeg');
-    expect(codeOf({ ...BASE, bendDeg: Number.NEGATIVE_INFINITY })).toBe('NOT_FINITE:bendDeg');
-    expect(codeOf({ ...BASE, bendDeg: 180, welds: 1 })).toBe('OUT_OF_RANGE:welds');
-    expect(codeOf({ ...BASE, welds: undefined, bendDeg: 180, pieces: 2 })).toBe('OUT_OF_RANGE:pieces');
-    expect(codeOf({ ...BASE, radiusMm: NPS12_STD.odMm / 2 - 0.01 })).toBe('OUT_OF_RANGE:radiusMm');
-    expect(codeOf({ ...BASE, radiusMm: Number.POSITIVE_INFINITY })).toBe('NOT_FINITE:radiusMm');
-    expect(codeOf({ ...BASE, radiusMm: undefined })).toBe('BAD_OPTION:radiusMm');
-    expect(codeOf({ ...BASE, radiusNps: 1.5 })).toBe('BAD_OPTION:radiusNps');
-    expect(codeOf({ ...BASE, radiusMm: undefined, radiusNps: 1.5, pipe: { odMm: 323.85, wallMm: 9.525 } })).toBe('BAD_OPTION:radiusNps');
-    expect(codeOf({ ...BASE, radiusMm: undefined, radiusNps: 0.5 })).toBe('OUT_OF_RANGE:radiusNps');
-    expect(codeOf({ ...BASE, radiusMm: undefined, radiusNps: Number.NaN })).toBe('NOT_A_NUMBER:radiusNps');
-    expect(codeOf({ ...BASE, tangentMm: -1 })).toBe('NEGATIVE:tangentMm');
-    expect(codeOf({ ...BASE, fitSurface: 'mid' as never })).toBe('BAD_OPTION:fitSurface');
-    expect(codeOf({ ...BASE, pipe: { odMm: 0, wallMm: 1 } })).toBe('NEGATIVE:pipe.odMm');
-    expect(codeOf(undefined as never)).toBe('EMPTY_INPUT:miter');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, welds: 0 }), 'OUT_OF_RANGE', 'welds');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, welds: undefined, pieces: 0 }), 'OUT_OF_RANGE', 'pieces');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, welds: undefined, pieces: 1 }), 'OUT_OF_RANGE', 'pieces');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, welds: 2.5 }), 'OUT_OF_RANGE', 'welds');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, welds: 3, pieces: 4 }), 'BAD_OPTION', 'pieces');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, welds: undefined }), 'BAD_OPTION', 'welds');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, bendDeg: 0 }), 'OUT_OF_RANGE', 'bendDeg');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, bendDeg: 180.5 }), 'OUT_OF_RANGE', 'bendDeg');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, bendDeg: Number.NaN }), 'NOT_A_NUMBER', 'bendDeg');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, bendDeg: Number.NEGATIVE_INFINITY }), 'NOT_FINITE', 'bendDeg');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, bendDeg: 180, welds: 1 }), 'OUT_OF_RANGE', 'welds');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, welds: undefined, bendDeg: 180, pieces: 2 }), 'OUT_OF_RANGE', 'pieces');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, radiusMm: NPS12_STD.odMm / 2 - 0.01 }), 'OUT_OF_RANGE', 'radiusMm');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, radiusMm: Number.POSITIVE_INFINITY }), 'NOT_FINITE', 'radiusMm');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, radiusMm: undefined }), 'BAD_OPTION', 'radiusMm');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, radiusNps: 1.5 }), 'BAD_OPTION', 'radiusNps');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, radiusMm: undefined, radiusNps: 1.5, pipe: { odMm: 323.85, wallMm: 9.525 } }), 'BAD_OPTION', 'radiusNps');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, radiusMm: undefined, radiusNps: 0.5 }), 'OUT_OF_RANGE', 'radiusNps');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, radiusMm: undefined, radiusNps: Number.NaN }), 'NOT_A_NUMBER', 'radiusNps');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, tangentMm: -1 }), 'NEGATIVE', 'tangentMm');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, fitSurface: 'mid' as never }), 'BAD_OPTION', 'fitSurface');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, pipe: { odMm: 0, wallMm: 1 } }), 'NEGATIVE', 'pipe.odMm');
+    expectGirthError(() => resolveMiterSpec(undefined as never), 'EMPTY_INPUT', 'miter');
   });
 
   it('accepts a radius of exactly half the OD (throat length zero)', () => {

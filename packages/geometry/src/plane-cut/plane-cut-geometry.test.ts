@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { isGirthError } from '@girth/pipes';
+import { expectGirthError } from '@girth/pipes/test-support';
 import { hitGenerator } from '../generators.js';
 import { dot, sub } from '../vec3.js';
 import { planeCutGeometry } from './plane-cut-geometry.js';
@@ -16,16 +16,6 @@ function cutbacks(g: ReturnType<typeof planeCutGeometry>, phis: readonly number[
   });
   const longest = Math.max(...axial);
   return axial.map((a) => longest - a);
-}
-
-function codeOf(f: () => unknown): string {
-  try {
-    f();
-  } catch (e) {
-    if (isGirthError(e)) return `${e.code}:${e.field}`;
-    throw e;
-  }
-  return 'no error';
 }
 
 describe('planeCutGeometry', () => {
@@ -95,14 +85,14 @@ describe('planeCutGeometry', () => {
 
   it('rejects bad input with typed errors', () => {
     const pipe = NPS6_STD;
-    expect(codeOf(() => planeCutGeometry({ pipe, angleDeg: 0 }))).toBe('OUT_OF_RANGE:angleDeg');
-    expect(codeOf(() => planeCutGeometry({ pipe, angleDeg: 90.001 }))).toBe('OUT_OF_RANGE:angleDeg');
-    expect(codeOf(() => planeCutGeometry({ pipe, angleDeg: -30 }))).toBe('OUT_OF_RANGE:angleDeg');
-    expect(codeOf(() => planeCutGeometry({ pipe, angleDeg: Number.NaN }))).toBe('NOT_A_NUMBER:angleDeg');
-    expect(codeOf(() => planeCutGeometry({ pipe, angleDeg: Number.POSITIVE_INFINITY }))).toBe('NOT_FINITE:angleDeg');
-    expect(codeOf(() => planeCutGeometry({ pipe, angleDeg: 45, gapMm: -1 }))).toBe('NEGATIVE:gapMm');
-    expect(codeOf(() => planeCutGeometry({ pipe, angleDeg: 45, gapMm: Number.NaN }))).toBe('NOT_A_NUMBER:gapMm');
-    expect(codeOf(() => planeCutGeometry({ pipe, angleDeg: 45, fitSurface: 'bore' as never }))).toBe('BAD_OPTION:fitSurface');
-    expect(codeOf(() => planeCutGeometry({ pipe: { odMm: 100, wallMm: 60 }, angleDeg: 45 }))).toBe('WALL_TOO_THICK:pipe.wallMm');
+    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: 0 }), 'OUT_OF_RANGE', 'angleDeg');
+    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: 90.001 }), 'OUT_OF_RANGE', 'angleDeg');
+    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: -30 }), 'OUT_OF_RANGE', 'angleDeg');
+    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: Number.NaN }), 'NOT_A_NUMBER', 'angleDeg');
+    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: Number.POSITIVE_INFINITY }), 'NOT_FINITE', 'angleDeg');
+    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: 45, gapMm: -1 }), 'NEGATIVE', 'gapMm');
+    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: 45, gapMm: Number.NaN }), 'NOT_A_NUMBER', 'gapMm');
+    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: 45, fitSurface: 'bore' as never }), 'BAD_OPTION', 'fitSurface');
+    expectGirthError(() => planeCutGeometry({ pipe: { odMm: 100, wallMm: 60 }, angleDeg: 45 }), 'WALL_TOO_THICK', 'pipe.wallMm');
   });
 });

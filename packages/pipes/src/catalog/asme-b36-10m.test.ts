@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { GirthError } from '../errors.js';
+import { girthErrorOf } from '../test-support/girth-error-of.js';
 import { expectClose } from '../internal/test-support/expect-close.js';
 import { resolvePipe } from '../pipe/resolve.js';
 import { ASME_B36_10M } from './asme-b36-10m.js';
@@ -42,16 +42,6 @@ const REFERENCE_ROWS: ReadonlyArray<readonly [string, number, number, number, nu
 ];
 const REFERENCE_COLUMNS = ['STD', 'XS', 'Sch 40', 'Sch 80', 'Sch 160', 'XXS'] as const;
 
-function codeOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof GirthError) return e.code;
-    throw e;
-  }
-  return 'no error';
-}
-
 describe('ASME B36.10M against REFERENCES.md', () => {
   for (const [nps, odIn, ...walls] of REFERENCE_ROWS) {
     it(`NPS ${nps}: OD ${odIn} in and STD/XS/40/80/160/XXS walls`, () => {
@@ -63,7 +53,7 @@ describe('ASME B36.10M against REFERENCES.md', () => {
         const wallIn = walls[i];
         const name = `NPS ${nps} ${column}`;
         if (wallIn === null || wallIn === undefined) {
-          expect(codeOf(() => resolvePipe(name)), `${name} is not listed`).toBe('UNKNOWN_SCHEDULE');
+          expect(girthErrorOf(() => resolvePipe(name)).code, `${name} is not listed`).toBe('UNKNOWN_SCHEDULE');
           return;
         }
         const pipe = resolvePipe(name);

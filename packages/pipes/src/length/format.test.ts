@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { GirthError } from '../errors.js';
+import { expectGirthError } from '../test-support/girth-error-of.js';
 import { formatLength } from './format.js';
 import { formatLengthBoth } from './format-both.js';
 import { roundToFraction } from './fraction.js';
@@ -15,16 +15,6 @@ const inch = (value: number): number => value * MM_PER_INCH;
  * (about 2e-6 at 1e10 steps of 0.0001 mm).
  */
 const nearInteger = (x: number): boolean => Math.abs(x - Math.round(x)) <= 1e-6 + 1e-12 * Math.abs(x);
-
-function codeOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof GirthError) return e.code;
-    throw e;
-  }
-  return 'no error';
-}
 
 describe('formatLength: feet-inch-fractions', () => {
   // Expected strings follow the trade's way of writing tape readings (common
@@ -78,13 +68,13 @@ describe('formatLength: decimal styles', () => {
   });
 
   it('refuses bad values and options with typed errors', () => {
-    expect(codeOf(() => formatLength(Number.NaN, { format: 'mm' }))).toBe('NOT_A_NUMBER');
-    expect(codeOf(() => formatLength(Number.POSITIVE_INFINITY, { format: 'ft-in' }))).toBe('NOT_FINITE');
-    expect(codeOf(() => formatLength(1, { format: 'ft-in', fraction: 64 as 16 }))).toBe('BAD_OPTION');
-    expect(codeOf(() => formatLength(1, { format: 'mm', decimals: 7 }))).toBe('BAD_OPTION');
-    expect(codeOf(() => formatLength(1, { format: 'in', decimals: 1.5 }))).toBe('BAD_OPTION');
-    expect(codeOf(() => formatLength(1, { format: 'yd' as 'mm' }))).toBe('BAD_OPTION');
-    expect(codeOf(() => formatLength(1e300, { format: 'ft-in' }))).toBe('OUT_OF_RANGE');
+    expectGirthError(() => formatLength(Number.NaN, { format: 'mm' }), 'NOT_A_NUMBER');
+    expectGirthError(() => formatLength(Number.POSITIVE_INFINITY, { format: 'ft-in' }), 'NOT_FINITE');
+    expectGirthError(() => formatLength(1, { format: 'ft-in', fraction: 64 as 16 }), 'BAD_OPTION');
+    expectGirthError(() => formatLength(1, { format: 'mm', decimals: 7 }), 'BAD_OPTION');
+    expectGirthError(() => formatLength(1, { format: 'in', decimals: 1.5 }), 'BAD_OPTION');
+    expectGirthError(() => formatLength(1, { format: 'yd' as 'mm' }), 'BAD_OPTION');
+    expectGirthError(() => formatLength(1e300, { format: 'ft-in' }), 'OUT_OF_RANGE');
   });
 });
 

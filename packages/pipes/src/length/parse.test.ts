@@ -1,23 +1,13 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { GirthError } from '../errors.js';
+import { girthErrorOf } from '../test-support/girth-error-of.js';
 import { expectClose } from '../internal/test-support/expect-close.js';
 import { parseLength } from './parse.js';
 import { MM_PER_FOOT, MM_PER_INCH, inchesToMm, lengthToMm, mmToInches, mmToLength } from './units.js';
 
 /** Floating-point slack for exact conversions, mm. */
 const EPS_MM = 1e-9;
-
-/** Runs `fn` and returns the GirthError it throws (fails the test otherwise). */
-function girthErrorOf(fn: () => unknown): GirthError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof GirthError) return e;
-    throw new Error(`expected a GirthError, got ${String(e)}`);
-  }
-  throw new Error('expected a GirthError, nothing was thrown');
-}
 
 describe('unit constants', () => {
   it('uses the exact international inch and foot', () => {

@@ -1,18 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { GirthError } from '../errors.js';
+import { girthErrorOf } from '../test-support/girth-error-of.js';
 import { expectClose } from '../internal/test-support/expect-close.js';
 import { pipeFromDimensions } from './from-dimensions.js';
-
-function errorOf(fn: () => unknown): GirthError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof GirthError) return e;
-    throw new Error(`expected a GirthError, got ${String(e)}`);
-  }
-  throw new Error('expected a GirthError, nothing was thrown');
-}
 
 describe('pipeFromDimensions', () => {
   it('makes a custom pipe with ID = OD - 2 x wall', () => {
@@ -47,12 +37,12 @@ describe('pipeFromDimensions', () => {
       [406.4, 300, 'WALL_TOO_THICK', /less than 203.2 mm/],
     ];
     for (const [od, wall, code, message] of cases) {
-      const e = errorOf(() => pipeFromDimensions(od, wall));
+      const e = girthErrorOf(() => pipeFromDimensions(od, wall));
       expect(e.code, `${od} x ${wall}`).toBe(code);
       expect(e.field).toBe('pipe');
       expect(e.message).toMatch(message);
     }
-    expect(errorOf(() => pipeFromDimensions(10, 6, undefined, { field: 'header' })).field).toBe('header');
-    expect(errorOf(() => pipeFromDimensions('406.4' as unknown as number, 9.53)).code).toBe('NOT_A_NUMBER');
+    expect(girthErrorOf(() => pipeFromDimensions(10, 6, undefined, { field: 'header' })).field).toBe('header');
+    expect(girthErrorOf(() => pipeFromDimensions('406.4' as unknown as number, 9.53)).code).toBe('NOT_A_NUMBER');
   });
 });

@@ -3,22 +3,13 @@ import { describe, expect, it } from 'vitest';
 import { ASME_B36_10M } from '../catalog/asme-b36-10m.js';
 import { EN_10220 } from '../catalog/en-10220.js';
 import { GirthError } from '../errors.js';
+import { girthErrorOf } from '../test-support/girth-error-of.js';
 import { expectClose } from '../internal/test-support/expect-close.js';
 import { resolvePipe } from './resolve.js';
 import { pipesForNps } from './schedules-for.js';
 
 const IN = 25.4;
 const MM_TOL = 1e-9;
-
-function errorOf(fn: () => unknown): GirthError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof GirthError) return e;
-    throw new Error(`expected a GirthError, got ${String(e)}`);
-  }
-  throw new Error('expected a GirthError, nothing was thrown');
-}
 
 describe('resolvePipe: what a fitter types', () => {
   // Dimensions: ASME B36.10M / B36.19M, recalled (REFERENCES.md), in inches x 25.4;
@@ -185,7 +176,7 @@ describe('resolvePipe: bad input gets a typed error naming the field', () => {
   ];
   for (const [text, code, message] of cases) {
     it(`refuses ${JSON.stringify(text)} with ${code}`, () => {
-      const e = errorOf(() => resolvePipe(text));
+      const e = girthErrorOf(() => resolvePipe(text));
       expect(e.code).toBe(code);
       expect(e.field).toBe('pipe');
       expect(e.message).toMatch(/^pipe: /);
@@ -195,14 +186,14 @@ describe('resolvePipe: bad input gets a typed error naming the field', () => {
 
   it('uses the caller’s field name', () => {
     for (const text of ['', 'banana', 'NPS 7 STD', 'NPS 16 XXS', '10 x 5', '406.4 x 0', '12 inn x 1']) {
-      const e = errorOf(() => resolvePipe(text, { field: 'jobs[1].branch' }));
+      const e = girthErrorOf(() => resolvePipe(text, { field: 'jobs[1].branch' }));
       expect(e.field).toBe('jobs[1].branch');
       expect(e.message.startsWith('jobs[1].branch: ')).toBe(true);
     }
   });
 
   it('refuses non-text input with a typed error', () => {
-    expect(errorOf(() => resolvePipe(42 as unknown as string)).code).toBe('BAD_PIPE_NAME');
+    expect(girthErrorOf(() => resolvePipe(42 as unknown as string)).code).toBe('BAD_PIPE_NAME');
   });
 
   it('never returns NaN or throws anything but GirthError for any text (fast-check)', () => {

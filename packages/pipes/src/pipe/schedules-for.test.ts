@@ -1,17 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { GirthError } from '../errors.js';
+import { expectGirthError } from '../test-support/girth-error-of.js';
 import { dnSizes, npsSizes, pipesForNps, schedulesFor } from './schedules-for.js';
 import { resolvePipe } from './resolve.js';
-
-function codeOf(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof GirthError) return e.code;
-    throw e;
-  }
-  return 'no error';
-}
 
 describe('schedulesFor', () => {
   it('lists the schedules of a size, carbon first, in the standards’ order', () => {
@@ -36,9 +27,9 @@ describe('schedulesFor', () => {
   });
 
   it('refuses sizes that are not there, with typed errors on field nps', () => {
-    expect(codeOf(() => schedulesFor('7'))).toBe('UNKNOWN_SIZE');
-    expect(codeOf(() => schedulesFor('sixteen'))).toBe('BAD_PIPE_NAME');
-    expect(codeOf(() => schedulesFor('16 std'))).toBe('BAD_PIPE_NAME');
+    expectGirthError(() => schedulesFor('7'), 'UNKNOWN_SIZE');
+    expectGirthError(() => schedulesFor('sixteen'), 'BAD_PIPE_NAME');
+    expectGirthError(() => schedulesFor('16 std'), 'BAD_PIPE_NAME');
     try {
       schedulesFor('7');
     } catch (e) {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { isGirthError } from '@girth/pipes';
+import { expectGirthError } from '@girth/pipes/test-support';
 import { dot, miterGeometry, norm, sub, type MiterSpec, type Vec3 } from '@girth/geometry';
 import { layoutMiter } from './layout-miter.js';
 import type { MiterLayout } from './types.js';
@@ -14,16 +14,6 @@ const IN = 25.4;
 const NPS12_STD = { odMm: 12.75 * IN, wallMm: 0.375 * IN, label: 'NPS 12 STD', npsIn: 12 };
 const NPS8_XS = { odMm: 8.625 * IN, wallMm: 0.5 * IN, label: 'NPS 8 XS', npsIn: 8 };
 const rad = (deg: number) => (deg * Math.PI) / 180;
-
-function codeOf(f: () => unknown): string {
-  try {
-    f();
-  } catch (e) {
-    if (isGirthError(e)) return `${e.code}:${e.field}`;
-    throw e;
-  }
-  return 'no error';
-}
 
 function template(layout: MiterLayout, id: string): Template {
   const t = layout.templates.find((x) => x.id === id);
@@ -209,15 +199,15 @@ describe('layoutMiter', () => {
   });
 
   it('rejects bad input with typed errors', () => {
-    expect(codeOf(() => layoutMiter({ ...ELBOW, pieces: 0 }))).toBe('OUT_OF_RANGE:pieces');
-    expect(codeOf(() => layoutMiter({ ...ELBOW, pieces: undefined, welds: 0 }))).toBe('OUT_OF_RANGE:welds');
-    expect(codeOf(() => layoutMiter({ ...ELBOW, welds: 3 }))).toBe('BAD_OPTION:pieces');
-    expect(codeOf(() => layoutMiter({ ...ELBOW, bendDeg: 0 }))).toBe('OUT_OF_RANGE:bendDeg');
-    expect(codeOf(() => layoutMiter({ ...ELBOW, bendDeg: 200 }))).toBe('OUT_OF_RANGE:bendDeg');
-    expect(codeOf(() => layoutMiter({ ...ELBOW, radiusNps: undefined, radiusMm: 100 }))).toBe('OUT_OF_RANGE:radiusMm');
-    expect(codeOf(() => layoutMiter({ ...ELBOW, pipe: { odMm: 323.85, wallMm: 9.525 } }))).toBe('BAD_OPTION:radiusNps');
-    expect(codeOf(() => layoutMiter({ ...ELBOW, tangentMm: Number.NaN }))).toBe('NOT_A_NUMBER:tangentMm');
-    expect(codeOf(() => layoutMiter(ELBOW, { stations: 361 }))).toBe('OUT_OF_RANGE:stations');
-    expect(codeOf(() => layoutMiter(ELBOW, { chordToleranceMm: 0.0001 }))).toBe('OUT_OF_RANGE:chordToleranceMm');
+    expectGirthError(() => layoutMiter({ ...ELBOW, pieces: 0 }), 'OUT_OF_RANGE', 'pieces');
+    expectGirthError(() => layoutMiter({ ...ELBOW, pieces: undefined, welds: 0 }), 'OUT_OF_RANGE', 'welds');
+    expectGirthError(() => layoutMiter({ ...ELBOW, welds: 3 }), 'BAD_OPTION', 'pieces');
+    expectGirthError(() => layoutMiter({ ...ELBOW, bendDeg: 0 }), 'OUT_OF_RANGE', 'bendDeg');
+    expectGirthError(() => layoutMiter({ ...ELBOW, bendDeg: 200 }), 'OUT_OF_RANGE', 'bendDeg');
+    expectGirthError(() => layoutMiter({ ...ELBOW, radiusNps: undefined, radiusMm: 100 }), 'OUT_OF_RANGE', 'radiusMm');
+    expectGirthError(() => layoutMiter({ ...ELBOW, pipe: { odMm: 323.85, wallMm: 9.525 } }), 'BAD_OPTION', 'radiusNps');
+    expectGirthError(() => layoutMiter({ ...ELBOW, tangentMm: Number.NaN }), 'NOT_A_NUMBER', 'tangentMm');
+    expectGirthError(() => layoutMiter(ELBOW, { stations: 361 }), 'OUT_OF_RANGE', 'stations');
+    expectGirthError(() => layoutMiter(ELBOW, { chordToleranceMm: 0.0001 }), 'OUT_OF_RANGE', 'chordToleranceMm');
   });
 });

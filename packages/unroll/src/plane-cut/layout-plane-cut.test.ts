@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { isGirthError } from '@girth/pipes';
+import { expectGirthError } from '@girth/pipes/test-support';
 import { layoutPlaneCut } from './layout-plane-cut.js';
 import { expectClose } from '../internal/test-support/expect-close.js';
 import { column, cutPolylines, expectAllFinite, maxChordDistance, stationPhis } from './test-support/template-checks.js';
@@ -10,16 +10,6 @@ const IN = 25.4;
 const NPS6_STD = { odMm: 6.625 * IN, wallMm: 0.28 * IN, label: 'NPS 6 STD', npsIn: 6 };
 const NPS16_STD = { odMm: 16 * IN, wallMm: 0.375 * IN, label: 'NPS 16 STD', npsIn: 16 };
 const rad = (deg: number) => (deg * Math.PI) / 180;
-
-function codeOf(f: () => unknown): string {
-  try {
-    f();
-  } catch (e) {
-    if (isGirthError(e)) return `${e.code}:${e.field}`;
-    throw e;
-  }
-  return 'no error';
-}
 
 describe('layoutPlaneCut', () => {
   it('tabulates the plane-cut ordinate at every station (REFERENCES.md: (D/2) tan(c) (1 − cos psi), psi from the long point)', () => {
@@ -109,13 +99,13 @@ describe('layoutPlaneCut', () => {
   });
 
   it('rejects bad input with typed errors', () => {
-    expect(codeOf(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 0 }))).toBe('OUT_OF_RANGE:angleDeg');
-    expect(codeOf(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 91 }))).toBe('OUT_OF_RANGE:angleDeg');
-    expect(codeOf(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: Number.NaN }))).toBe('NOT_A_NUMBER:angleDeg');
-    expect(codeOf(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 45 }, { stations: 3 }))).toBe('OUT_OF_RANGE:stations');
-    expect(codeOf(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 45 }, { stations: 16.5 }))).toBe('OUT_OF_RANGE:stations');
-    expect(codeOf(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 45 }, { chordToleranceMm: 0 }))).toBe('NEGATIVE:chordToleranceMm');
-    expect(codeOf(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 45, gapMm: Number.POSITIVE_INFINITY }))).toBe('NOT_FINITE:gapMm');
-    expect(codeOf(() => layoutPlaneCut({ pipe: { odMm: -1, wallMm: 1 }, angleDeg: 45 }))).toBe('NEGATIVE:pipe.odMm');
+    expectGirthError(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 0 }), 'OUT_OF_RANGE', 'angleDeg');
+    expectGirthError(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 91 }), 'OUT_OF_RANGE', 'angleDeg');
+    expectGirthError(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: Number.NaN }), 'NOT_A_NUMBER', 'angleDeg');
+    expectGirthError(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 45 }, { stations: 3 }), 'OUT_OF_RANGE', 'stations');
+    expectGirthError(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 45 }, { stations: 16.5 }), 'OUT_OF_RANGE', 'stations');
+    expectGirthError(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 45 }, { chordToleranceMm: 0 }), 'NEGATIVE', 'chordToleranceMm');
+    expectGirthError(() => layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 45, gapMm: Number.POSITIVE_INFINITY }), 'NOT_FINITE', 'gapMm');
+    expectGirthError(() => layoutPlaneCut({ pipe: { odMm: -1, wallMm: 1 }, angleDeg: 45 }), 'NEGATIVE', 'pipe.odMm');
   });
 });
