@@ -21,15 +21,24 @@ export interface ParsedArgs {
  * @example parseOptions(['--angle', '45'], { angle: { type: 'string' } }).values.angle // '45'
  */
 export function parseOptions(argv: readonly string[], options: OptionSpec, allowPositionals = false): ParsedArgs {
+  let parsed: ReturnType<typeof parseArgs>;
   try {
-    const { values, positionals } = parseArgs({ args: joinNegativeValues(argv, options), options, allowPositionals, strict: true });
-    return { values: values as ParsedArgs['values'], positionals };
+    parsed = parseArgs({ args: joinNegativeValues(argv, options), options, allowPositionals, strict: true, tokens: true });
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     const option = /'(-{1,2}[^' ]+)/.exec(message)?.[1] ?? 'arguments';
     const hint = /argument is ambiguous/.test(message) ? `; a value that starts with "-" is written joined, ${option}=VALUE` : '';
     throw new GirthError('BAD_OPTION', option, `${option}: ${firstSentence(message)}${hint}`, option);
   }
+  const seen = new Set<string>();
+  for (const token of parsed.tokens ?? []) {
+    if (token.kind !== 'option') continue;
+    if (seen.has(token.name)) {
+      throw new GirthError('BAD_OPTION', `--${token.name}`, `--${token.name}: given twice; give it once`, token.name);
+    }
+    seen.add(token.name);
+  }
+  return { values: parsed.values as ParsedArgs['values'], positionals: parsed.positionals };
 }
 
 /**
@@ -82,6 +91,9 @@ export function requireOption(args: ParsedArgs, name: string, example: string): 
   return v;
 }
 
+/** A plain decimal number as a person writes it: `45`, `-2.5`, `.75`, `1e-3`; not `0x10` or `Infinity`. */
+const DECIMAL_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
+
 /**
  * A number option (plain decimal), or `fallback` when absent.
  * @throws GirthError `NOT_A_NUMBER` naming the option when it is not a number.
@@ -90,7 +102,7 @@ export function numberOption(args: ParsedArgs, name: string, fallback?: number):
   const v = stringOption(args, name);
   if (v === undefined) return fallback;
   const n = Number(v.trim());
-  if (v.trim() === '' || !Number.isFinite(n)) {
+  if (!DECIMAL_NUMBER.test(v.trim()) || !Number.isFinite(n)) {
     throw new GirthError('NOT_A_NUMBER', `--${name}`, `--${name}: expected a number, got "${v}"`, v);
   }
   return n;

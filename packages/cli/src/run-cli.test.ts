@@ -307,6 +307,12 @@ describe('bad input: exit 2, the option named on stderr, nothing written', () =>
     { name: 'a missing required option', argv: ['branch', '--header', 'NPS 12 STD'], option: '--branch' },
     { name: 'only one surface override', argv: [...TEE, '--branch-surface', 'inside'], option: '--header-surface' },
     { name: 'a label that starts with a dash, not joined', argv: [...TEE, '--job', '-x'], option: '--job' },
+    { name: 'a lateral shallower than 1°', argv: [...TEE, '--angle', '1e-300'], option: '--angle' },
+    { name: 'an option given twice', argv: [...TEE, '--angle', '45', '--angle', '90'], option: '--angle' },
+    { name: 'a number written in hexadecimal', argv: [...TEE, '--stations', '0x10'], option: '--stations' },
+    { name: 'a cut-back shallower than 1°', argv: ['cutback', '--pipe', 'NPS 6 STD', '--angle', '1e-300'], option: '--angle' },
+    { name: 'an overflowing miter radius', argv: ['miter', '--pipe', 'NPS 10 STD', '--bend', '90', '--welds', '3', '--radius-nps', '1e308'], option: '--radius-nps' },
+    { name: 'a miter radius beyond a kilometre', argv: ['miter', '--pipe', 'NPS 10 STD', '--bend', '90', '--welds', '3', '--radius', '2000000mm'], option: '--radius' },
   ];
 
   for (const c of cases) {

@@ -17,5 +17,13 @@ export const DEFAULT_CHORD_TOLERANCE_MM = 0.05;
 /** Angles below this many degrees between a branch and its header get a warning: the crotch becomes a long feather edge that is hard to fit and weld. */
 export const SHALLOW_LATERAL_WARN_DEG = 15;
 
+/**
+ * The shallowest angle, degrees, between a cut pipe's axis and what it meets
+ * (a lateral's header, a cut-back's plane) that Girth lays out. At 1° the cut
+ * already runs out about 57 diameters along the pipe (cot 1°); below it the
+ * numbers stop meaning anything a shop can cut, and toward 0 they overflow.
+ */
+export const MIN_JOINT_ANGLE_DEG = 1;
+
 /** Geometry closer than this (mm) is treated as touching; 1 nm, far below any shop measurement. */
 export const LENGTH_EPS_MM = 1e-6;

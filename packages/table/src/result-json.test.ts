@@ -82,4 +82,14 @@ describe('toResultJson', () => {
       expect(caught.field).toBe(field);
     }
   });
+
+  it('keeps a very large finite length as a number (never null) when it cannot be rounded to 1e-6', () => {
+    // Invariant: 1e300 mm times 1e6 overflows; the value must pass through unrounded, and JSON must not write null.
+    const base = sampleResult();
+    const [first, ...rest] = base.templates;
+    const big = { ...first!, stations: first!.stations.map((st) => ({ ...st, lengthsMm: { ...st.lengthsMm, cutback: 1e300 } })) };
+    const json = JSON.parse(JSON.stringify(toResultJson({ ...base, templates: [big, ...rest] }, { units: 'mm' })));
+    expect(json.templates[0].stations[0].cutback).toBe(1e300);
+  });
 });
+

@@ -21,7 +21,9 @@ const STATION_KEYS = new Set(['n', 'angleDeg']);
 const SCALE = 10 ** RESULT_DECIMALS;
 /** Rounds away float noise; never returns -0. */
 function denoise(v: number): number {
-  const r = Math.round(v * SCALE) / SCALE;
+  const scaled = v * SCALE;
+  if (!Number.isFinite(scaled)) return v; // too large to round at 1e-6: keep it as it is (finite, checked by the caller)
+  const r = Math.round(scaled) / SCALE;
   return r === 0 ? 0 : r;
 }
 

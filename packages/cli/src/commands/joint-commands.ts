@@ -34,8 +34,9 @@ const branch: JointCommand = {
 
   --header PIPE          run pipe, e.g. "NPS 12 STD", "DN 300 x 8", "12.75 od x .375"
   --branch PIPE          branch pipe
-  --angle DEG            angle between branch and header axes, (0, 90] (default 90)
-  --offset LENGTH        sideways offset of the branch axis (default 0)
+  --angle DEG            angle between branch and header axes, 1 to 90 (default 90)
+  --offset LENGTH        sideways offset of the branch axis (default 0); positive is to
+                         your right looking down on the header from the heel end, toe away
   --fit set-on|set-in    set-on: branch ID on header OD; set-in: branch OD on header ID
                          (default set-on)
   --gap LENGTH           root gap normal to the header (default 0)
@@ -111,7 +112,7 @@ const cutback: JointCommand = {
   help: `girth cutback: a pipe end cut to meet a flat surface at an angle
 
   --pipe PIPE            the pipe, e.g. "NPS 6 STD"
-  --angle DEG            angle between the pipe axis and the plane, (0, 90]; 90 is square
+  --angle DEG            angle between the pipe axis and the plane, 1 to 90; 90 is square
   --gap LENGTH           root gap square to the plane (default 0)
   --surface od|id        pipe surface laid on the plane (default od)
 

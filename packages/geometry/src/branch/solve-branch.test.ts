@@ -162,6 +162,17 @@ describe('solveBranch', () => {
     for (const [spec, code, field] of cases) {
       expect(girthErrorOf(() => solveBranch(spec)), `${code} ${field}`).toMatchObject({ code, field });
     }
-    expect(girthErrorOf(() => solveBranch({ ...ok, angleDeg: 120 })).message).toMatch(/more than 0° and at most 90°.*got 120°/);
+    expect(girthErrorOf(() => solveBranch({ ...ok, angleDeg: 120 })).message).toMatch(/from 1° to 90°.*got 120°/);
+  });
+});
+
+describe('the shallowest lateral', () => {
+  it('lays out 1° and refuses anything shallower, naming the limit', () => {
+    // MIN_JOINT_ANGLE_DEG: at 1° the cut runs out cot(1°) ≈ 57.3 diameters; below it the numbers overflow toward 0°.
+    const spec = { header: { odMm: 323.85, wallMm: 9.525 }, branch: { odMm: 168.275, wallMm: 7.112 } };
+    expect(() => solveBranch({ ...spec, angleDeg: 1 })).not.toThrow();
+    const error = girthErrorOf(() => solveBranch({ ...spec, angleDeg: 0.999 }));
+    expect([error.code, error.field]).toEqual(['BAD_ANGLE', 'angleDeg']);
+    expect(error.message).toMatch(/from 1° to 90°/);
   });
 });

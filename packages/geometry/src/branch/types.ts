@@ -24,7 +24,7 @@ export interface BranchContact {
 export interface BranchSpec {
   readonly header: PipeSection;
   readonly branch: PipeSection;
-  /** Angle between the branch and header axes, degrees, in (0, 90]; 90 (a tee) when left out. */
+  /** Angle between the branch and header axes, degrees, from 1 (MIN_JOINT_ANGLE_DEG) to 90; 90 (a tee) when left out. */
   readonly angleDeg?: number;
   /** Sideways offset of the branch axis from the header axis, mm, signed, along +y; 0 when left out. */
   readonly offsetMm?: number;

@@ -13,3 +13,10 @@ export const B31_3_MULTIPLE_MITER_MAX_CUT_DEG = 22.5;
 
 /** Slack when comparing a cut angle with a code limit, degrees: far below any protractor. */
 export const CUT_ANGLE_EPS_DEG = 1e-9;
+
+/**
+ * Largest centreline radius of a miter elbow, mm (1 km). Real segmented bends
+ * stay within tens of metres; the bound turns an absurd or overflowing radius
+ * into a typed error instead of numbers no shop can use.
+ */
+export const MAX_MITER_RADIUS_MM = 1e6;

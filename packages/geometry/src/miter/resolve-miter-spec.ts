@@ -5,7 +5,7 @@
 import { GirthError, MM_PER_INCH as MM_PER_IN, requireFinite, requireInRange, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
 import { fitRadiusMm, type CutFitSurface } from '../plane-cut/fit-surface.js';
 import { resolvePipeSection, type ResolvedPipeSection } from '../pipe-section.js';
-import { MAX_MITER_WELDS } from './limits.js';
+import { MAX_MITER_RADIUS_MM, MAX_MITER_WELDS } from './limits.js';
 import type { MiterSpec, ResolvedMiterSpec } from './types.js';
 
 
@@ -83,6 +83,7 @@ function resolveRadiusMm(spec: MiterSpec, pipe: ResolvedPipeSection): number {
   }
   if (hasMm) {
     const r = requireFinite(spec.radiusMm, 'radiusMm');
+    requireRadiusWithinLimit(r, 'radiusMm', spec.radiusMm);
     if (r < halfOd) {
       throw new GirthError(
         'OUT_OF_RANGE',
@@ -98,6 +99,7 @@ function resolveRadiusMm(spec: MiterSpec, pipe: ResolvedPipeSection): number {
     throw new GirthError('BAD_OPTION', 'radiusNps', 'radiusNps: a radius in nominal sizes needs the pipe\'s nominal size (pipe.npsIn); give radiusMm instead', spec.radiusNps);
   }
   const r = multiple * pipe.npsIn * MM_PER_IN;
+  requireRadiusWithinLimit(r, 'radiusNps', spec.radiusNps);
   if (r < halfOd) {
     const least = halfOd / (pipe.npsIn * MM_PER_IN);
     throw new GirthError(
@@ -108,4 +110,15 @@ function resolveRadiusMm(spec: MiterSpec, pipe: ResolvedPipeSection): number {
     );
   }
   return r;
+}
+
+function requireRadiusWithinLimit(radiusMm: number, field: 'radiusMm' | 'radiusNps', value: unknown): void {
+  if (!(radiusMm <= MAX_MITER_RADIUS_MM)) {
+    throw new GirthError(
+      'OUT_OF_RANGE',
+      field,
+      `${field}: a centreline radius of ${radiusMm.toExponential(3)} mm is beyond the ${MAX_MITER_RADIUS_MM / 1e6} km Girth lays out`,
+      value,
+    );
+  }
 }

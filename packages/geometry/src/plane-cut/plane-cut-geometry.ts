@@ -2,6 +2,7 @@
  * A pipe end cut to meet a plane: the generator bundle and the plane it meets.
  */
 import { requireInRange, requireNonNegative, type GirthWarning } from '@girth/pipes';
+import { MIN_JOINT_ANGLE_DEG } from '../tolerances.js';
 import { intersectLine, offsetSurface } from '../surfaces/line-intersection.js';
 import type { GeneratorBundle, PlaneSurface } from '../types.js';
 import { addScaled, type Vec3 } from '../vec3.js';
@@ -21,16 +22,16 @@ const ORIGIN: Vec3 = [0, 0, 0];
  * The cut itself comes from intersecting the bundle's generators with `host`
  * (see `hitGenerator`).
  *
- * @param spec pipe, `angleDeg` in (0, 90] between the axis and the plane, optional
+ * @param spec pipe, `angleDeg` in [1, 90] (see MIN_JOINT_ANGLE_DEG) between the axis and the plane, optional
  *   `gapMm` ≥ 0 and `fitSurface` (`od` by default).
- * @throws GirthError `OUT_OF_RANGE` for an angle outside (0, 90]; `NEGATIVE` for a
+ * @throws GirthError `OUT_OF_RANGE` for an angle outside [1, 90] (MIN_JOINT_ANGLE_DEG); `NEGATIVE` for a
  *   negative gap; `NOT_A_NUMBER`/`NOT_FINITE` for NaN or Infinity; `BAD_OPTION` for
  *   an unknown fit surface; the pipe errors of {@link resolvePipeSection}.
  * @example planeCutGeometry({ pipe: { odMm: 168.3, wallMm: 7.11 }, angleDeg: 60 }).cutAngleDeg // 30
  */
 export function planeCutGeometry(spec: PlaneCutSpec): PlaneCutGeometry {
   const pipe = resolvePipeSection(spec.pipe);
-  const angleDeg = requireInRange(spec.angleDeg, 'angleDeg', 0, 90, { minOpen: true, unit: 'degrees' });
+  const angleDeg = requireInRange(spec.angleDeg, 'angleDeg', MIN_JOINT_ANGLE_DEG, 90, { unit: 'degrees' });
   const gapMm = spec.gapMm === undefined ? 0 : requireNonNegative(spec.gapMm, 'gapMm');
   const fitSurface: CutFitSurface = spec.fitSurface ?? 'od';
   const radius = fitRadiusMm(pipe, fitSurface);

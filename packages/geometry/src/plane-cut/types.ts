@@ -11,7 +11,7 @@ import type { PipeSection, ResolvedPipeSection } from '../pipe-section.js';
 /** A pipe end cut to meet a plane (a cut-back to a flat surface). */
 export interface PlaneCutSpec {
   readonly pipe: PipeSection;
-  /** Angle between the pipe axis and the plane, degrees, in (0, 90]; 90 is a square cut. */
+  /** Angle between the pipe axis and the plane, degrees, from 1 (MIN_JOINT_ANGLE_DEG) to 90; 90 is a square cut. */
   readonly angleDeg: number;
   /** Root gap left between the pipe end and the plane, measured square to the plane, mm, ≥ 0 (default 0). */
   readonly gapMm?: number;

@@ -57,7 +57,8 @@ export function branchCutText(g: BranchGeometry, stretchOutMm: number): { title:
     notes: [
       ...jointNotes(g),
       `Wrap on the branch OD; stretch-out ${formatLengthBoth(stretchOutMm)}. Station 1 (HEEL) goes on the heel line: the branch generator on the obtuse side, in the plane of both axes; ` +
-        'stations run toward the side a positive offset moves the branch to, TOE at 180°.',
+        'stations run toward the side a positive offset moves the branch to, TOE at 180°. ' +
+        'Print side out, seen from outside with the pipe body up the sheet, stations run to the right.',
       'Cutback is measured from the square line (through the long point) back along the pipe. Cut radially on the line, then bevel.',
       ...tail(g),
     ],
@@ -75,7 +76,8 @@ export function headerHoleText(g: BranchGeometry): { title: string; notes: strin
     notes: [
       ...jointNotes(g),
       `Mark on the header OD. Girth runs around the header from the top line (the header generator the branch axis points from), positive toward the side a positive offset moves the branch to; ` +
-        'axial runs along the header from the girth line where the branch axis crosses the header axis.',
+        'axial runs along the header from the girth line where the branch axis crosses the header axis. ' +
+        'Print side out, looking down on the header from the heel end (TOE away from you, at the top of the sheet), positive girth and a positive offset are to your right.',
       `The HEEL edge of the hole (station 1) is on the obtuse side, the end of the header the branch leans away from; the TOE edge faces the way the branch leans. The hole outline is the branch ${FACE_WORD[g.spec.contact.branch]} on the header OD.`,
       ...tail(g),
     ],

@@ -18,9 +18,9 @@ import type { PlaneCutLayout } from './types.js';
  * and `cutback` back from the square line through the long point; for the OD
  * these are (D/2) tan(c) (1 + cos phi), c = 90° − angle.
  *
- * @param spec pipe, `angleDeg` in (0, 90], optional `gapMm` ≥ 0 and `fitSurface`.
+ * @param spec pipe, `angleDeg` in [1, 90], optional `gapMm` ≥ 0 and `fitSurface`.
  * @param options `stations` (4 to 360, default 16), `chordToleranceMm` (default 0.05).
- * @throws GirthError `OUT_OF_RANGE` for an angle outside (0, 90] or a bad station
+ * @throws GirthError `OUT_OF_RANGE` for an angle outside [1, 90] (MIN_JOINT_ANGLE_DEG) or a bad station
  *   count; `NEGATIVE`, `NOT_A_NUMBER`, `NOT_FINITE`, `WALL_TOO_THICK`, `BAD_OPTION`
  *   for bad sizes, gap, fit surface or chord tolerance.
  * @example

@@ -161,4 +161,17 @@ describe('sampleCut', () => {
     expect(code(() => sampleCut(b, h, { stations: 16, wrapOdMm: 100, chordToleranceMm: 1e-5 }))).toBe('OUT_OF_RANGE:chordToleranceMm');
     expect(code(() => sampleCut(b, h, { stations: 16, wrapOdMm: 100, kinkPhisRad: [Infinity] }))).toBe('NOT_FINITE:kinkPhisRad[0]');
   });
+
+  it('refuses a cut that would run out absurdly far instead of returning overflowing numbers', () => {
+    // Invariant: a plane tilted 90° − 1e-12° from square meets the generators about 1e14 radii away
+    // (tan of the tilt), beyond the 10 km bound; the call must end in a typed error, not NaN or a hang.
+    let caught: unknown;
+    try {
+      sampleCut(pipeAlongZ(50), tiltedPlane(90 - 1e-12), { stations: 16, wrapOdMm: 100 });
+    } catch (e) {
+      caught = e;
+    }
+    expect(isGirthError(caught, 'OUT_OF_RANGE') && caught.field).toBe('joint');
+  });
 });
+

@@ -22,6 +22,17 @@ const MAX_START_SPAN_RAD = TWO_PI / 24;
 
 /** Deepest halving of one span; 2^-40 of 15° is far below any shop measure, so this only stops runaway loops. */
 const MAX_HALVINGS = 40;
+/**
+ * Most generator cuts one call may make. A joint at 0.05 mm needs a few hundred;
+ * this bound turns input that would need millions (absurd sizes or tolerances)
+ * into a typed error instead of a hang.
+ */
+const MAX_GENERATOR_CUTS = 200_000;
+/**
+ * Largest axial position of a cut, mm, that Girth accepts (10 km). Real joints
+ * stay within metres; beyond this the input is absurd or has overflowed.
+ */
+const MAX_CUT_REACH_MM = 1e7;
 
 /**
  * Share of the chord tolerance the modelled deviation of a chord may reach
@@ -101,7 +112,9 @@ interface Sample {
  * sample points exactly.
  *
  * @throws GirthError `NO_INTERSECTION` (field `stations`) naming the station
- *   or the angle where a generator misses the host; `OUT_OF_RANGE`,
+ *   or the angle where a generator misses the host; `OUT_OF_RANGE` (field
+ *   `joint`) when a cut would reach absurdly far (overflowing input), or (field
+ *   `chordToleranceMm`) when it would need more than 200 000 points; `OUT_OF_RANGE`,
  *   `NEGATIVE`, `NOT_A_NUMBER`, `NOT_FINITE` for bad options.
  * @example
  * const cut = sampleCut(bundle, header, { stations: 16, wrapOdMm: 168.3 });
@@ -115,10 +128,23 @@ export function sampleCut(bundle: GeneratorBundle, host: HostSurface, options: S
   const radiusMm = wrapOdMm / 2;
   const flatten = options.flatten ?? ((hit: GeneratorHit): Point2 => [radiusMm * hit.phiRad, hit.axialMm]);
 
+  let cuts = 0;
   const at = (phiRad: number): Sample => {
+    if (++cuts > MAX_GENERATOR_CUTS) {
+      throw new GirthError('OUT_OF_RANGE', 'chordToleranceMm', `chordToleranceMm: the cut would need more than ${MAX_GENERATOR_CUTS} points at ${tol} mm; check the sizes and angles`, tol);
+    }
     const hit = hitGenerator(bundle, host, phiRad);
     if (hit === undefined) throw missError(phiRad, n);
-    return { hit, flat: flatten(hit) };
+    const flat = flatten(hit);
+    if (!(Math.abs(hit.axialMm) <= MAX_CUT_REACH_MM && Number.isFinite(flat[0]) && Number.isFinite(flat[1]))) {
+      throw new GirthError(
+        'OUT_OF_RANGE',
+        'joint',
+        `joint: the cut would reach ${hit.axialMm.toExponential(2)} mm along the pipe, beyond the ${MAX_CUT_REACH_MM / 1e6} km Girth lays out; check the sizes, angles and radius`,
+        hit.axialMm,
+      );
+    }
+    return { hit, flat };
   };
 
   const stationSamples: Sample[] = [];
