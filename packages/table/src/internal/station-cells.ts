@@ -6,8 +6,9 @@ import { GirthError, formatLength, requireFinite } from '@girth/pipes';
 import type { Template } from '@girth/unroll';
 import type { StationTableOptions } from '../types.js';
 
-/** Headings of the two fixed columns. */
+/** Heading of the first fixed column: the 1-based station number. */
 export const STATION_HEADING = 'Station';
+/** Heading of the second fixed column: the station angle in degrees from the heel. */
 export const ANGLE_HEADING = 'Angle (deg)';
 
 /** Heading row and body rows of a station table. */
