@@ -3,7 +3,7 @@ import { expectClose } from '../internal/test-support/expect-close.js';
 import { resolvePipe } from '../pipe/resolve.js';
 import { EN_10220 } from './en-10220.js';
 
-/** REFERENCES.md: transcriptions differ by 0.1 mm at DN 250/300, so ODs are checked to 0.1 mm. */
+/** REFERENCES.md: published copies of the table differ by 0.1 mm at DN 250/300, so ODs are checked to 0.1 mm. */
 const OD_TOL_MM = 0.1 + 1e-9;
 
 // EN 10220 / ISO 4200 series 1 outside diameters, mm, recalled (REFERENCES.md).

@@ -4,7 +4,7 @@
  * standards list many walls per OD.
  *
  * Source: RECALLED from the standards. DN 15-600 are cross-checked against
- * the project's REFERENCES.md in `en-10220.test.ts` (to 0.1 mm: transcriptions
+ * the project's REFERENCES.md in `en-10220.test.ts` (to 0.1 mm: published copies
  * differ by 0.1 mm at DN 250/300); DN 700-1200 are recalled without a second
  * source. DN 1100 is left out (we could not recall a series-1 OD for it).
  */
