@@ -4,16 +4,10 @@
  * flat triangle strip back into 3D. Lives under `test-support/`, which the
  * build leaves out; only tests import it.
  */
-import fc from 'fast-check';
 
 export type P2 = readonly [number, number];
 export type V3 = readonly [number, number, number];
 
-/** Throws unless |actual − expected| ≤ tol (absolute); NaN never passes. */
-export function expectNear(actual: number, expected: number, tol: number, label: string): void {
-  const diff = Math.abs(actual - expected);
-  if (!(diff <= tol)) throw new Error(`${label}: got ${actual}, expected ${expected} ± ${tol} (off by ${diff})`);
-}
 
 export const d2 = (a: P2, b: P2): number => Math.hypot(a[0] - b[0], a[1] - b[1]);
 export const d3 = (a: V3, b: V3): number => Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]);
@@ -117,15 +111,4 @@ export function rollBack(
   };
 }
 
-/** A reducer of plausible shop size: large diameter 20..3000 mm, small 5..95 % of it, length 5..3000 mm. */
-export const reducerArb = fc
-  .record({
-    largeDiameterMm: fc.double({ min: 20, max: 3000, noNaN: true }),
-    smallFraction: fc.double({ min: 0.05, max: 0.95, noNaN: true }),
-    lengthMm: fc.double({ min: 5, max: 3000, noNaN: true }),
-  })
-  .map((x) => ({
-    largeDiameterMm: x.largeDiameterMm,
-    smallDiameterMm: x.largeDiameterMm * x.smallFraction,
-    lengthMm: x.lengthMm,
-  }));
+export { expectNear, reducerArb } from '@girth/geometry/test-support';
