@@ -40,7 +40,8 @@ type Mat4 = Parameters<InstanceType<ManifoldApi['Manifold']>['transform']>[0];
 const IN = 25.4;
 // ASME B36.10M, recalled (REFERENCES.md): OD and STD wall in inches.
 const NPS24_STD = { odMm: 24 * IN, wallMm: 0.375 * IN };
-const NPS16_STD = { odMm: 16 * IN, wallMm: 0.375 * IN };
+const NPS20_STD = { odMm: 20 * IN, wallMm: 0.375 * IN };
+const NPS14_STD = { odMm: 14 * IN, wallMm: 0.375 * IN };
 const NPS12_STD = { odMm: 12.75 * IN, wallMm: 0.375 * IN };
 const SEGMENTS = 256;
 
@@ -115,7 +116,7 @@ function minCrossingSine(spec: OracleBranchSpec): number {
 }
 
 const cases: readonly { readonly name: string; readonly spec: OracleBranchSpec }[] = [
-  { name: 'tee, NPS 16 STD set on NPS 24 STD', spec: { header: NPS24_STD, branch: NPS16_STD } },
+  { name: 'tee, NPS 14 STD set on NPS 20 STD', spec: { header: NPS20_STD, branch: NPS14_STD } },
   { name: '45° lateral, NPS 12 STD set on NPS 24 STD', spec: { header: NPS24_STD, branch: NPS12_STD, angleDeg: 45 } },
 ];
 

@@ -6,7 +6,7 @@
 import { bench, describe } from 'vitest';
 import { formatLength, parseLength, resolvePipe } from '../src/index.js';
 
-const lengths = [`1'-6 3/16"`, '18 3/16', '462mm', '18.1875in', '3/4"', '2ft', '.375'];
+const lengths = [`2'-1 11/16"`, '25 11/16', '652mm', '25.6875in', '3/4"', '2ft', '.375'];
 const names = ['NPS 16 STD', '1 1/2" xs', '6" 80S', 'DN 150 x 7.1', '406.4x9.53mm', '24" OD x 3/8"'];
 
 describe('lengths', () => {

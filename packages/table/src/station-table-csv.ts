@@ -10,7 +10,7 @@ import type { StationTableOptions } from './types.js';
  * The station table of a template as CSV (RFC 4180): a header row
  * (`Station`, `Angle (deg)`, then the template's column headings) and one
  * record per station, lengths written as in {@link formatStationTable}
- * (`1'-6 3/16"` becomes `"1'-6 3/16"""`). Fields holding a comma, double quote,
+ * (`2'-1 11/16"` becomes `"2'-1 11/16"""`). Fields holding a comma, double quote,
  * CR or LF are quoted with inner quotes doubled; a heading that would start a
  * spreadsheet formula (`=`, `+`, `-`, `@`) is prefixed with `'`. Records end in
  * CR LF. No title or caution rows: the file is data; print the text table for

@@ -7,7 +7,7 @@ export type TableLengthFormat = 'ft-in' | 'in' | 'mm';
 
 /** Options of {@link formatStationTable} and {@link stationTableCsv}. */
 export interface StationTableOptions {
-  /** `'ft-in'` (`1'-6 3/16"`), `'in'` (`18.192"`) or `'mm'` (`462.1 mm`). */
+  /** `'ft-in'` (`2'-1 11/16"`), `'in'` (`25.688"`) or `'mm'` (`652.5 mm`). */
   readonly format: TableLengthFormat;
   /** For `'ft-in'`: round to 1/8, 1/16 (default) or 1/32 inch. */
   readonly fraction?: 8 | 16 | 32;

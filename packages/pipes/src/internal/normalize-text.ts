@@ -18,7 +18,7 @@ const VULGAR_FRACTIONS: Readonly<Record<string, string>> = {
 
 /**
  * The text trimmed, lower-cased and reduced to the ASCII marks the parsers know.
- * @example normalizeInputText(' 1′–6½″ ') // "1'-6 1/2\""
+ * @example normalizeInputText(' 2′–1½″ ') // "2'-1 1/2\""
  */
 export function normalizeInputText(text: string): string {
   return text

@@ -25,11 +25,11 @@ export interface ReadLengthOptions {
 }
 
 /** Examples of accepted forms, quoted in error messages. */
-export const LENGTH_EXAMPLES = `462mm, 18.1875in, 18 3/16", 1'-6 3/16" or 2ft`;
+export const LENGTH_EXAMPLES = `652mm, 25.6875in, 25 11/16", 2'-1 11/16" or 2ft`;
 
 /**
- * A number at the start of the text: a mixed number (`18 3/16`, `18-3/16`), a
- * fraction (`3/4`) or a decimal (`18.1875`, `.375`).
+ * A number at the start of the text: a mixed number (`25 11/16`, `25-11/16`), a
+ * fraction (`3/4`) or a decimal (`25.6875`, `.375`).
  */
 const QUANTITY = /^(?:(\d+)(?: +| *- *)(\d+) *\/ *(\d+)|(\d+) *\/ *(\d+)|(\d+(?:\.\d*)?|\.\d+))/;
 
@@ -142,7 +142,7 @@ export function readLength(input: string | number, options: ReadLengthOptions = 
     return { kind: 'read-length', mm, writtenUnit: unit.unit };
   }
 
-  // Feet, then optionally inches: 1'-6 3/16", 1' 6-3/16", 1ft 6in, 1'6.
+  // Feet, then optionally inches: 2'-1 11/16", 2' 1-11/16", 1ft 6in, 1'6.
   const afterFeet = unit.rest.replace(/^[ -]+/, '');
   let inches = 0;
   if (afterFeet !== '') {

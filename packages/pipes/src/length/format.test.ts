@@ -20,8 +20,8 @@ describe('formatLength: feet-inch-fractions', () => {
   // Expected strings follow the trade's way of writing tape readings (common
   // practice): feet-inches with a hyphen, reduced fractions, under a foot as inches.
   const cases: ReadonlyArray<readonly [number, string, (8 | 16 | 32)?]> = [
-    [inch(18.1875), `1'-6 3/16"`],
-    [inch(6.1875), `6 3/16"`],
+    [inch(25.6875), `2'-1 11/16"`],
+    [inch(1.6875), `1 11/16"`],
     [inch(0.75), `3/4"`],
     [inch(6.5), `6 1/2"`],
     [inch(6), `6"`],
@@ -29,16 +29,16 @@ describe('formatLength: feet-inch-fractions', () => {
     [inch(11 + 15 / 16 + 1 / 16), `1'-0"`],
     [inch(11.97), `1'-0"`],
     [inch(60), `5'-0"`],
-    [inch(12 + 3 / 16), `1'-0 3/16"`],
+    [inch(12 + 11 / 16), `1'-0 11/16"`],
     [inch(23.99), `2'-0"`],
     [0, `0"`],
     [0.01, `0"`],
     [-0.01, `0"`],
-    [inch(-18.1875), `-1'-6 3/16"`],
+    [inch(-25.6875), `-2'-1 11/16"`],
     [inch(-0.5), `-1/2"`],
-    // 6 3/16 in lies halfway between 6 1/8 and 6 1/4: halves round away from zero.
-    [inch(6.1875), `6 1/4"`, 8],
-    [inch(-6.1875), `-6 1/4"`, 8],
+    // 1 11/16 in lies halfway between 1 5/8 and 1 3/4: halves round away from zero.
+    [inch(1.6875), `1 3/4"`, 8],
+    [inch(-1.6875), `-1 3/4"`, 8],
     [inch(6 + 7 / 32), `6 7/32"`, 32],
     [inch(12.5), `1'-0 1/2"`, 32],
     [inch(0.02), `1/32"`, 32],
@@ -53,8 +53,9 @@ describe('formatLength: feet-inch-fractions', () => {
 
 describe('formatLength: decimal styles', () => {
   it('writes millimetres with 1 decimal by default', () => {
-    expect(formatLength(461.9625, { format: 'mm' })).toBe('462.0 mm');
-    expect(formatLength(461.9625, { format: 'mm', decimals: 2 })).toBe('461.96 mm');
+    // 25 11/16 in x 25.4 = 652.4625 mm exactly (1 in = 25.4 mm by definition).
+    expect(formatLength(inch(25.6875), { format: 'mm' })).toBe('652.5 mm');
+    expect(formatLength(inch(25.6875), { format: 'mm', decimals: 2 })).toBe('652.46 mm');
     expect(formatLength(406.4, { format: 'mm', decimals: 0 })).toBe('406 mm');
     expect(formatLength(-0.04, { format: 'mm' })).toBe('0.0 mm');
     expect(formatLength(-12.34, { format: 'mm' })).toBe('-12.3 mm');
@@ -63,7 +64,7 @@ describe('formatLength: decimal styles', () => {
   it('writes inches with 3 decimals by default', () => {
     expect(formatLength(406.4, { format: 'in' })).toBe('16.000"');
     expect(formatLength(inch(0.375), { format: 'in' })).toBe('0.375"');
-    expect(formatLength(inch(18.1875), { format: 'in', decimals: 4 })).toBe('18.1875"');
+    expect(formatLength(inch(25.6875), { format: 'in', decimals: 4 })).toBe('25.6875"');
     expect(formatLength(inch(-0.0001), { format: 'in' })).toBe('0.000"');
   });
 

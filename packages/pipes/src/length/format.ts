@@ -10,7 +10,7 @@ import { mmToInches, type LengthFormat } from './units.js';
 
 /** Options of {@link formatLength}. */
 export interface FormatLengthOptions {
-  /** `'mm'` (`462.1 mm`), `'in'` (`18.192"`) or `'ft-in'` (`1'-6 3/16"`). */
+  /** `'mm'` (`652.5 mm`), `'in'` (`25.688"`) or `'ft-in'` (`2'-1 11/16"`). */
   readonly format: LengthFormat;
   /** For `'ft-in'`: round to 1/8, 1/16 (default) or 1/32 inch. */
   readonly fraction?: FractionDenominator;
@@ -33,12 +33,12 @@ const fixed = toFixedHalfAway;
 /**
  * Writes a length for people, rounding it to the format's resolution.
  *
- * - `mm`: decimal millimetres, `462.1 mm` (1 decimal by default);
- * - `in`: decimal inches, `18.192"` (3 decimals by default);
+ * - `mm`: decimal millimetres, `652.5 mm` (1 decimal by default);
+ * - `in`: decimal inches, `25.688"` (3 decimals by default);
  * - `ft-in`: feet-inch-fractions to the nearest 1/16 in by default (1/8 or
  *   1/32 on request), fractions reduced and carried (`1'-0"`, never
- *   `11 16/16"` or `0'-12"`); under a foot as inches only (`6 3/16"`, `3/4"`),
- *   a foot or more as `1'-6 3/16"`; zero as `0"`.
+ *   `11 16/16"` or `0'-12"`); under a foot as inches only (`1 11/16"`, `3/4"`),
+ *   a foot or more as `2'-1 11/16"`; zero as `0"`.
  * Negative values get a leading minus; a value that rounds to zero never does.
  * The result reads back with `parseLength` to the rounded value.
  *
@@ -46,9 +46,9 @@ const fixed = toFixedHalfAway;
  * @throws GirthError `NOT_A_NUMBER`/`NOT_FINITE` for NaN or ±Infinity, `BAD_OPTION`
  *   for an unknown format, fraction or decimals, `OUT_OF_RANGE` for a length too
  *   long to write in inch fractions.
- * @example formatLength(461.9625, { format: 'ft-in' }) // `1'-6 3/16"`
- * @example formatLength(461.9625, { format: 'mm' }) // '462.0 mm'
- * @example formatLength(461.9625, { format: 'in', decimals: 4 }) // '18.1875"'
+ * @example formatLength(652.4625, { format: 'ft-in' }) // `2'-1 11/16"`
+ * @example formatLength(652.4625, { format: 'mm' }) // '652.5 mm'
+ * @example formatLength(652.4625, { format: 'in', decimals: 4 }) // '25.6875"'
  */
 export function formatLength(mm: number, options: FormatLengthOptions): string {
   const field = options.field ?? 'length';

@@ -14,7 +14,7 @@ const nearInteger = (x: number): boolean => Math.abs(x - Math.round(x)) <= 1e-6 
 describe('roundToFraction', () => {
   it('rounds to the nearest sixteenth as read on a tape', () => {
     // Ordinates are read to the nearest 1/16 in in the field (common practice, REFERENCES.md).
-    expectClose(roundToFraction(157.2, 16), 6.1875 * MM_PER_INCH, 1e-9, '157.2 mm -> 6 3/16 in');
+    expectClose(roundToFraction(42.9, 16), 1.6875 * MM_PER_INCH, 1e-9, '42.9 mm -> 1 11/16 in'); // 42.9 / 25.4 x 16 = 27.02 sixteenths
     expectClose(roundToFraction(25.4 * (1 / 32), 16), 25.4 / 16, 1e-9, 'a half step rounds up');
     expectClose(roundToFraction(-25.4 * (1 / 32), 16), -25.4 / 16, 1e-9, 'and a negative half step down');
     expect(Object.is(roundToFraction(-0.1, 16), 0)).toBe(true);
@@ -59,7 +59,7 @@ describe('feetInchParts', () => {
       kind: 'feet-inch-parts', negative: false, feet: 1, inches: 0, numerator: 0, denominator: 1,
     });
     expect(feetInchParts(5.999 * MM_PER_INCH)).toMatchObject({ feet: 0, inches: 6, numerator: 0, denominator: 1 });
-    expect(feetInchParts(18.1875 * MM_PER_INCH)).toMatchObject({ feet: 1, inches: 6, numerator: 3, denominator: 16 });
+    expect(feetInchParts(25.6875 * MM_PER_INCH)).toMatchObject({ feet: 2, inches: 1, numerator: 11, denominator: 16 });
     expect(feetInchParts(-0.5 * MM_PER_INCH, 32)).toMatchObject({ negative: true, feet: 0, inches: 0, numerator: 1, denominator: 2 });
   });
 

@@ -76,7 +76,7 @@ function toSteps(mm: number, denominator: FractionDenominator, field: string): n
  * @param denominator 8, 16 or 32.
  * @throws GirthError `NOT_A_NUMBER`/`NOT_FINITE` for NaN or ±Infinity, `BAD_OPTION`
  *   for another denominator, `OUT_OF_RANGE` for absurdly long lengths.
- * @example roundToFraction(157.2, 16) // 157.1625 (6 3/16 in)
+ * @example roundToFraction(42.9, 16) // 42.8625 (1 11/16 in)
  */
 export function roundToFraction(mm: number, denominator: FractionDenominator): number {
   const steps = toSteps(mm, denominator, 'length');
@@ -92,7 +92,7 @@ export function roundToFraction(mm: number, denominator: FractionDenominator): n
  * @param mm any finite length in millimetres (negative allowed).
  * @param denominator 8, 16 (default) or 32.
  * @throws GirthError as {@link roundToFraction}.
- * @example feetInchParts(461.9625) // { feet: 1, inches: 6, numerator: 3, denominator: 16, ... }
+ * @example feetInchParts(652.4625) // { feet: 2, inches: 1, numerator: 11, denominator: 16, ... }
  */
 export function feetInchParts(mm: number, denominator: FractionDenominator = 16): FeetInchParts {
   const steps = toSteps(mm, denominator, 'length');

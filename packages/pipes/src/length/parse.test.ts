@@ -33,27 +33,27 @@ describe('unit constants', () => {
 
 describe('parseLength: accepted forms', () => {
   // Expected values are plain arithmetic on the exact inch (25.4 mm) and foot (304.8 mm).
-  const inch18_3_16 = 18.1875 * MM_PER_INCH; // 461.9625 mm
+  const inch25_11_16 = 25.6875 * MM_PER_INCH; // 652.4625 mm
   const cases: ReadonlyArray<readonly [string, number, 'mm' | 'in' | undefined]> = [
-    [`1'-6 3/16"`, inch18_3_16, undefined],
-    [`1' 6-3/16"`, inch18_3_16, undefined],
-    [`1'6 3/16"`, inch18_3_16, undefined],
-    [`1'-6-3/16"`, inch18_3_16, undefined],
-    [`1 ft 6 3/16 in`, inch18_3_16, undefined],
-    [`18 3/16`, inch18_3_16, 'in'],
-    [`18 3/16`, 18.1875, 'mm'],
-    [`18-3/16"`, inch18_3_16, undefined],
-    [`18.1875in`, inch18_3_16, undefined],
-    [`18.1875"`, inch18_3_16, undefined],
-    [`18.1875 inches`, inch18_3_16, undefined],
-    [`18.1875 IN`, inch18_3_16, undefined],
-    [`  18 3/16 " `, inch18_3_16, undefined],
+    [`2'-1 11/16"`, inch25_11_16, undefined],
+    [`2' 1-11/16"`, inch25_11_16, undefined],
+    [`2'1 11/16"`, inch25_11_16, undefined],
+    [`2'-1-11/16"`, inch25_11_16, undefined],
+    [`2 ft 1 11/16 in`, inch25_11_16, undefined],
+    [`25 11/16`, inch25_11_16, 'in'],
+    [`25 11/16`, 25.6875, 'mm'],
+    [`25-11/16"`, inch25_11_16, undefined],
+    [`25.6875in`, inch25_11_16, undefined],
+    [`25.6875"`, inch25_11_16, undefined],
+    [`25.6875 inches`, inch25_11_16, undefined],
+    [`25.6875 IN`, inch25_11_16, undefined],
+    [`  25 11/16 " `, inch25_11_16, undefined],
     [`3/4"`, 19.05, undefined],
-    [`462mm`, 462, 'in'],
-    [`462 MM`, 462, undefined],
-    [`46.2cm`, 462, 'in'],
-    [`0.462m`, 462, undefined],
-    [`0.462 metres`, 462, undefined],
+    [`652mm`, 652, 'in'],
+    [`652 MM`, 652, undefined],
+    [`65.2cm`, 652, 'in'],
+    [`0.652m`, 652, undefined],
+    [`0.652 metres`, 652, undefined],
     [`2ft`, 609.6, undefined],
     [`2 feet`, 609.6, undefined],
     [`5'`, 1524, undefined],
@@ -69,8 +69,8 @@ describe('parseLength: accepted forms', () => {
     [`6 in.`, 152.4, undefined],
     [`6''`, 152.4, undefined],
     // Typographic marks as pasted from documents.
-    [`1′–6 3⁄16″`, inch18_3_16, undefined],
-    [`1’-6 3/16”`, inch18_3_16, undefined],
+    [`2′–1 11⁄16″`, inch25_11_16, undefined],
+    [`2’-1 11/16”`, inch25_11_16, undefined],
     [`6½"`, 6.5 * MM_PER_INCH, undefined],
     [`½"`, 12.7, undefined],
   ];
@@ -88,7 +88,7 @@ describe('parseLength: accepted forms', () => {
 
   it('reads negative lengths only when allowed, and never returns -0', () => {
     expectClose(parseLength('-2in', { allowNegative: true }), -50.8, EPS_MM, '-2in');
-    expectClose(parseLength(`-1'-6 3/16"`, { allowNegative: true }), -inch18_3_16, EPS_MM, 'negative ft-in');
+    expectClose(parseLength(`-2'-1 11/16"`, { allowNegative: true }), -inch25_11_16, EPS_MM, 'negative ft-in');
     expectClose(parseLength(-3, { allowNegative: true, unit: 'in' }), -76.2, EPS_MM, '-3 in');
     expect(Object.is(parseLength('-0'), 0)).toBe(true);
     expect(Object.is(parseLength(-0), 0)).toBe(true);
@@ -121,8 +121,8 @@ describe('parseLength: bad input gets a typed error', () => {
     ['in 12', 'BAD_LENGTH'],
     ['--5', 'BAD_LENGTH'],
     ['12 x 5', 'BAD_LENGTH'],
-    [`6" 3/16`, 'BAD_LENGTH'],
-    [`1'-6mm`, 'BAD_LENGTH'],
+    [`1" 11/16`, 'BAD_LENGTH'],
+    [`2'-1mm`, 'BAD_LENGTH'],
     [`1' six`, 'BAD_LENGTH'],
     ['12 in 5', 'BAD_LENGTH'],
     ['18.5 1/4', 'BAD_LENGTH'],
@@ -130,7 +130,7 @@ describe('parseLength: bad input gets a typed error', () => {
     ['5 mmm', 'UNKNOWN_UNIT'],
     ['5 yd', 'UNKNOWN_UNIT'],
     ['1/0', 'DIVIDE_BY_ZERO'],
-    [`1'-6 3/0"`, 'DIVIDE_BY_ZERO'],
+    [`2'-1 11/0"`, 'DIVIDE_BY_ZERO'],
     ['-5mm', 'NEGATIVE'],
     [-5, 'NEGATIVE'],
     [Number.NaN, 'NOT_A_NUMBER'],
@@ -157,7 +157,7 @@ describe('parseLength: bad input gets a typed error', () => {
   });
 
   it('quotes accepted forms when it cannot read the text', () => {
-    expect(girthErrorOf(() => parseLength('abc')).message).toMatch(/1'-6 3\/16"/);
+    expect(girthErrorOf(() => parseLength('abc')).message).toMatch(/2'-1 11\/16"/);
   });
 
   it('never returns NaN or an infinite value for any text', () => {

@@ -6,7 +6,7 @@ import type { LengthUnit } from './units.js';
 
 /** Options of {@link parseLength}. */
 export interface ParseLengthOptions {
-  /** The job's unit, used for bare numbers (`18.5`, `18 3/16`). Default `'mm'`. */
+  /** The job's unit, used for bare numbers (`18.5`, `25 11/16`). Default `'mm'`. */
   readonly unit?: LengthUnit;
   /** The input field named in errors, e.g. `offset` or `jobs[2].length`. Default `'length'`. */
   readonly field?: string;
@@ -18,10 +18,10 @@ export interface ParseLengthOptions {
  * A length written by hand, in millimetres. Nothing is rounded.
  *
  * Accepted forms (whitespace and letter case do not matter):
- * - feet and inches: `1'-6 3/16"`, `1' 6-3/16"`, `1ft 6in`, `2ft`, `5'`;
- * - inches: `18 3/16"`, `18-3/16"`, `18.1875in`, `18.1875"`, `3/4"`, `6 inches`;
- * - metric: `462mm`, `46.2cm`, `0.462m`;
- * - bare numbers, mixed numbers and fractions (`18.5`, `.375`, `18 3/16`) in
+ * - feet and inches: `2'-1 11/16"`, `2' 1-11/16"`, `1ft 6in`, `2ft`, `5'`;
+ * - inches: `25 11/16"`, `25-11/16"`, `25.6875in`, `25.6875"`, `3/4"`, `6 inches`;
+ * - metric: `652mm`, `65.2cm`, `0.652m`;
+ * - bare numbers, mixed numbers and fractions (`18.5`, `.375`, `25 11/16`) in
  *   `options.unit` (default mm); a plain number is likewise read in `options.unit`.
  * Typographic primes and quotes (′ ″ ’ ”), Unicode minus signs and fractions
  * such as `½` are accepted too.
@@ -34,7 +34,7 @@ export interface ParseLengthOptions {
  *   `DIVIDE_BY_ZERO` for a fraction over zero (`1/0`); `NEGATIVE` for a length
  *   below zero unless `allowNegative`; `NOT_A_NUMBER` for NaN; `NOT_FINITE`
  *   for ±Infinity or a number too large to be finite.
- * @example parseLength(`1'-6 3/16"`) // 461.9625
+ * @example parseLength(`2'-1 11/16"`) // 652.4625
  * @example parseLength('18.5', { unit: 'in' }) // 469.9
  * @example parseLength('-2in', { allowNegative: true, field: 'offset' }) // -50.8
  */

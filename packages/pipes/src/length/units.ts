@@ -9,7 +9,7 @@ export type LengthUnit = 'mm' | 'in';
 
 /**
  * How a length is written out: decimal millimetres, decimal inches, or
- * feet-inch-fractions (`1'-6 3/16"`).
+ * feet-inch-fractions (`2'-1 11/16"`).
  */
 export type LengthFormat = 'mm' | 'in' | 'ft-in';
 
