@@ -1,10 +1,11 @@
 /**
  * What the command prints: the ordinate tables and each joint's own figures
- * (miter cut list, cone pattern), or the JSON result contract.
+ * (miter cut list, cone pattern). The JSON result contract is `toResultJson`
+ * of `@girth/table`.
  */
 import { formatLength, MM_PER_INCH, type LengthUnit } from '@girth/pipes';
 import { CAUTION, type ConeLayout, type LayoutResult, type MiterLayout } from '@girth/unroll';
-import { formatStationTable, toResultJson, type ResultJson, type TableLengthFormat } from '@girth/table';
+import { formatStationTable, type TableLengthFormat } from '@girth/table';
 
 /** How lengths are printed. */
 export interface ReportStyle {
@@ -91,40 +92,3 @@ function miterLines(result: MiterLayout, L: (mm: number) => string, style: Repor
 
 /** The caution printed once at the end of every report. */
 export const REPORT_CAUTION = CAUTION;
-
-/**
- * The JSON result contract (DESIGN.md) with each joint's own figures in the
- * job's unit: miter `pieces`, `cutAngleDeg`, `stockLength`; cone `pattern`.
- */
-export function layoutJson(result: LayoutResult, units: LengthUnit): ResultJson {
-  const base = toResultJson(result, { units });
-  const k = units === 'in' ? 1 / MM_PER_INCH : 1;
-  const len = (mm: number): number => Math.round(mm * k * 1e6) / 1e6;
-  if (isMiter(result)) {
-    return {
-      ...base,
-      bendDeg: result.bendDeg,
-      welds: result.welds,
-      cutAngleDeg: result.cutAngleDeg,
-      radius: len(result.radiusMm),
-      stockLength: len(result.stockLengthMm),
-      pieces: result.pieces.map((p) => ({ label: p.label, count: p.count, center: len(p.center), back: len(p.back), throat: len(p.throat) })),
-      cuts: result.stock.cuts.map((c) => ({ n: c.n, centerAt: len(c.centerAtMm), longSideDeg: c.longSideDeg })),
-    };
-  }
-  if (isCone(result)) {
-    const extra =
-      result.form === 'concentric'
-        ? {
-            pattern: {
-              outerRadius: len(result.pattern.outerRadius),
-              innerRadius: len(result.pattern.innerRadius),
-              sweepDeg: result.pattern.sweepDeg,
-              slantHeight: len(result.pattern.slantHeight),
-            },
-          }
-        : {};
-    return { ...base, form: result.form, length: len(result.lengthMm), apexAngleDeg: result.apexAngleDeg, ...extra };
-  }
-  return base;
-}

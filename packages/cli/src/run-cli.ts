@@ -13,7 +13,8 @@ import { layoutJoint } from './joints/layout-joint.js';
 import { parseJob } from './job/schema.js';
 import { planJob } from './job/run-job.js';
 import { planOutputs } from './outputs.js';
-import { layoutJson, layoutReportText, REPORT_CAUTION } from './report.js';
+import { toResultJson } from '@girth/table';
+import { layoutReportText, REPORT_CAUTION } from './report.js';
 import { writeFilesAtomically } from './write-files.js';
 
 /** The version printed by `--version`. */
@@ -77,7 +78,7 @@ async function jointCommand(command: JointCommand, argv: readonly string[], io: 
   const files = planOutputs(result, settings.request, settings.style);
   const written = await writeFilesAtomically(files, { force: settings.force });
   if (settings.json) {
-    io.out(`${JSON.stringify(layoutJson(result, settings.ctx.units), null, 2)}\n`);
+    io.out(`${JSON.stringify(toResultJson(result, { units: settings.ctx.units }), null, 2)}\n`);
     io.err(`${REPORT_CAUTION}\n`);
   } else if (written.length === 0) {
     io.out(`${layoutReportText(result, settings.style)}\n${REPORT_CAUTION}\n`);

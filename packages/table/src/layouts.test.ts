@@ -27,10 +27,11 @@ describe('tables of unroll layouts', () => {
     expect(Math.abs(t.stations[0]!['element']! - Math.hypot(4, 1.5))).toBeLessThan(1e-5);
   });
 
-  it('passes the cone pattern through with extra: true', () => {
-    const json = toResultJson(cone, { units: 'in', extra: true });
-    const pattern = json['pattern'] as { sweepDeg: number };
+  it('writes the cone pattern, radii in inches and the sweep in degrees', () => {
+    const json = toResultJson(cone, { units: 'in' });
+    const pattern = json['pattern'] as { sweepDeg: number; slantHeight: number };
     expect(Math.abs(pattern.sweepDeg - 126.4)).toBeLessThan(0.05); // published 126.4°
+    expect(Math.abs(pattern.slantHeight - Math.hypot(4, 1.5))).toBeLessThan(1e-5); // slant 4.272 in, as published
   });
 
   it('prints the cone stations in feet-inch-sixteenths', () => {

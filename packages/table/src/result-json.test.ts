@@ -1,13 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { isGirthError } from '@girth/pipes';
-import type { LayoutResult } from '@girth/unroll';
 import { toResultJson } from './result-json.js';
 import { INCH, planeCutOrdinateMm, sampleResult } from './test-support/fixtures.js';
 
 describe('toResultJson', () => {
   it('has exactly the contract keys of DESIGN.md', () => {
     const json = toResultJson(sampleResult(), { units: 'in' });
-    expect(Object.keys(json)).toEqual(['kind', 'units', 'templates', 'warnings', 'pipes']);
+    expect(Object.keys(json)).toEqual(['kind', 'units', 'templates', 'warnings', 'pipes', 'angleDeg', 'offset', 'gap', 'fit', 'contact', 'stationCount']);
     expect(json.kind).toBe('branch');
     expect(json.units).toBe('in');
     expect(json.templates.map((t) => t.id)).toEqual(['plane-cut', 'header-hole']);
@@ -42,16 +41,16 @@ describe('toResultJson', () => {
     expect(Math.abs(json.templates[0]!.stations[4]!['cutback']! - planeCutOrdinateMm(6.625 * INCH, 22.5, 90))).toBeLessThanOrEqual(5e-7);
   });
 
-  it('passes further result fields through only when asked, in their own units', () => {
-    expect(Object.keys(toResultJson(sampleResult(), { units: 'in' }))).not.toContain('pieces');
-    const json = toResultJson(sampleResult(), { units: 'in', extra: true });
-    expect(json['pieces']).toEqual([{ n: 1, lengthMm: 100, cutAngleDeg: 11.25 }]);
-    expect(json['note']).toBe('extra text');
-    expect(Object.keys(json).slice(0, 5)).toEqual(['kind', 'units', 'templates', 'warnings', 'pipes']);
+  it('writes the joint\'s own fields, lengths in the unit and angles in degrees', () => {
+    // 25.4 mm = 1 in exactly; a 1/16 in gap is 0.0625 in = 1.5875 mm (arithmetic on the inch).
+    const inch = toResultJson(sampleResult(), { units: 'in' });
+    expect(inch).toMatchObject({ angleDeg: 67.5, offset: 1, gap: 0.0625, fit: 'set-on', contact: { branch: 'inside', header: 'outside' }, stationCount: 16 });
+    const mm = toResultJson(sampleResult(), { units: 'mm' });
+    expect(mm).toMatchObject({ angleDeg: 67.5, offset: 25.4, gap: 1.5875, stationCount: 16 });
   });
 
   it('serialises to JSON without loss (no NaN, no undefined)', () => {
-    const json = toResultJson(sampleResult(), { units: 'in', extra: true });
+    const json = toResultJson(sampleResult(), { units: 'in' });
     expect(JSON.parse(JSON.stringify(json))).toEqual(json);
   });
 
@@ -61,13 +60,13 @@ describe('toResultJson', () => {
     const cases: Array<[() => unknown, string, string]> = [
       [() => toResultJson(base, { units: 'ft' as never }), 'BAD_OPTION', 'options.units'],
       [
-        () => toResultJson({ ...base, templates: [{ ...wrap, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: Number.NaN, cutback: 0 } }] }] }, { units: 'mm' }),
+        () => toResultJson({ ...base, templates: [{ ...wrap, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: Number.NaN, cutback: 0 } }] }, base.templates[1]] }, { units: 'mm' }),
         'NOT_A_NUMBER',
         'templates[0].stations[0].lengthsMm.girth',
       ],
       [() => toResultJson({ ...base, pipes: [{ ...base.pipes[0]!, odMm: Infinity }] }, { units: 'in' }), 'NOT_FINITE', 'pipes[0].odMm'],
-      [() => toResultJson({ ...base, templates: [{ ...wrap, stationColumns: [{ key: 'n', heading: 'N' }] }] }, { units: 'in' }), 'BAD_JOB', 'templates[0].stationColumns'],
-      [() => toResultJson({ ...base, bad: [1, Number.NaN] } as LayoutResult, { units: 'in', extra: true }), 'NOT_A_NUMBER', 'bad[1]'],
+      [() => toResultJson({ ...base, templates: [{ ...wrap, stationColumns: [{ key: 'n', heading: 'N' }] }, base.templates[1]] }, { units: 'in' }), 'BAD_JOB', 'templates[0].stationColumns'],
+      [() => toResultJson({ ...base, offsetMm: Number.NaN }, { units: 'in' }), 'NOT_A_NUMBER', 'offsetMm'],
     ];
     for (const [fn, code, field] of cases) {
       let caught: unknown;
@@ -86,9 +85,9 @@ describe('toResultJson', () => {
   it('keeps a very large finite length as a number (never null) when it cannot be rounded to 1e-6', () => {
     // Invariant: 1e300 mm times 1e6 overflows; the value must pass through unrounded, and JSON must not write null.
     const base = sampleResult();
-    const [first, ...rest] = base.templates;
-    const big = { ...first!, stations: first!.stations.map((st) => ({ ...st, lengthsMm: { ...st.lengthsMm, cutback: 1e300 } })) };
-    const json = JSON.parse(JSON.stringify(toResultJson({ ...base, templates: [big, ...rest] }, { units: 'mm' })));
+    const [first, second] = base.templates;
+    const big = { ...first, stations: first.stations.map((st) => ({ ...st, lengthsMm: { ...st.lengthsMm, cutback: 1e300 } })) };
+    const json = JSON.parse(JSON.stringify(toResultJson({ ...base, templates: [big, second] }, { units: 'mm' })));
     expect(json.templates[0].stations[0].cutback).toBe(1e300);
   });
 });

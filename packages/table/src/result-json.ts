@@ -3,6 +3,7 @@
  */
 import { GirthError, MM_PER_INCH, requireFinite } from '@girth/pipes';
 import type { LayoutResult, PipeUsed, Template } from '@girth/unroll';
+import { jointFields } from './internal/joint-fields.js';
 import { hasStationValue } from './internal/station-cells.js';
 import type { PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson, WarningJson } from './types.js';
 
@@ -13,8 +14,6 @@ import type { PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson
  */
 export const RESULT_DECIMALS = 6;
 
-/** Keys of a result that the contract itself writes; everything else is extra. */
-const CONTRACT_KEYS = new Set(['kind', 'units', 'templates', 'warnings', 'pipes']);
 /** Keys of a station that come before its columns. */
 const STATION_KEYS = new Set(['n', 'angleDeg']);
 
@@ -70,49 +69,47 @@ function pipeJson(p: PipeUsed, i: number, toUnit: (mm: unknown, field: string) =
   };
 }
 
-/** A deep plain-JSON copy of an extra field; refuses non-finite numbers. */
-function plainCopy(value: unknown, field: string): unknown {
-  if (typeof value === 'number') return requireFinite(value, field);
-  if (value === null || typeof value === 'string' || typeof value === 'boolean') return value;
-  if (Array.isArray(value)) return value.map((v, i) => plainCopy(v, `${field}[${i}]`));
-  if (typeof value === 'object') {
-    const out: Record<string, unknown> = {};
-    for (const [k, v] of Object.entries(value)) {
-      if (v !== undefined && typeof v !== 'function') out[k] = plainCopy(v, `${field}.${k}`);
-    }
-    return out;
-  }
-  return undefined; // functions, symbols, bigints, undefined: not JSON
-}
-
 /**
- * The JSON result contract of a layout (DESIGN.md): `{ kind, units, templates:
- * [{ id, title, stretchOut?, stations: [{ n, angleDeg, <each station column
- * key>: number }] }], warnings, pipes: [{ role, label, od, wall, id }] }`.
+ * The JSON result contract of a layout (DESIGN.md), built here for every joint
+ * kind; the CLI's `--json` is `JSON.stringify` of it. The common part:
+ * `{ kind, units, templates: [{ id, title, stretchOut?, stations: [{ n,
+ * angleDeg, <each station column key>: number }] }], warnings, pipes: [{ role,
+ * label, od, wall, id }] }`, then the joint's own fields by `kind`:
  *
- * Lengths are converted from mm to `units` (inches by dividing by 25.4
- * exactly) and rounded to {@link RESULT_DECIMALS} places of that unit only to
- * remove float noise; angles stay in degrees. Key names are the contract's
- * and are never renamed. With `extra: true`, the result's further fields (a
- * miter's `pieces`, a cone's `pattern`, ...) are copied as plain JSON under
- * their own names, in the units their names say (`lengthMm` stays mm).
- * `JSON.stringify` of the value is the `--json` output.
+ * - `branch`: `angleDeg`, `offset`, `gap`, `fit`, `contact`, `stationCount`;
+ * - `plane-cut`: `angleDeg`, `cutAngleDeg`, `gap`, `fitSurface`,
+ *   `stationCount`, `centerCutback`, `gapSetback`;
+ * - `miter`: `bendDeg`, `welds`, `cutAngleDeg`, `radius`, `stockLength`,
+ *   `pieces: [{ label, count, center, back, throat, templateId }]`,
+ *   `cuts: [{ n, centerAt, longSideDeg, referenceLineAt, oppositeLineAt }]`,
+ *   `pieceCount`, `tangent`, `fitSurface`, `stationCount`;
+ * - `reducer`: `form`, `length`, `apexAngleDeg`, `pattern` (concentric:
+ *   `outerRadius`, `innerRadius`, `sweepDeg`, `slantHeight`), `diametersAt`,
+ *   `thickness`, `maxInclinationDeg`, `stationCount`, `segmentCount`, `ends`,
+ *   `pieces`, and for the eccentric form `seam` and `outline`.
+ *
+ * Every number is converted by its quantity: a length (its key has no unit
+ * suffix) from mm to `units` (inches by dividing by 25.4 exactly), an angle
+ * (key ending in `Deg`) kept in degrees, a count kept as it is; each is
+ * rounded to {@link RESULT_DECIMALS} places only to remove float noise. Key
+ * names are the contract's: fields may be added, never renamed.
  *
  * @param result a layout result from `@girth/unroll`.
- * @param options `units` `'in' | 'mm'`; `extra` (default false).
+ * @param options `units` `'in' | 'mm'`.
  * @throws GirthError `BAD_OPTION` for unknown units; `NOT_A_NUMBER` /
- *   `NOT_FINITE` naming a missing or non-finite length, e.g.
- *   `templates[0].stations[3].lengthsMm.cutback`; `BAD_JOB` for a station
- *   column named `n` or `angleDeg`.
+ *   `NOT_FINITE` naming a missing or non-finite value, e.g.
+ *   `templates[0].stations[3].lengthsMm.cutback` or `pieces[1].center`;
+ *   `BAD_JOB` for a station column named `n` or `angleDeg`.
  * @example
  * ```ts
- * const json = toResultJson(layoutBranch(spec), { units: 'in' });
+ * const json = toResultJson(layoutMiter(spec), { units: 'in' });
  * json.templates[0].stations[0].cutback // decimal inches
+ * json.pieces[0].center // decimal inches too
  * ```
  */
 export function toResultJson(result: LayoutResult, options: ResultJsonOptions): ResultJson {
   if (options === null || typeof options !== 'object') {
-    throw new GirthError('BAD_OPTION', 'options', 'options: expected { units, extra? }', options);
+    throw new GirthError('BAD_OPTION', 'options', 'options: expected { units }', options);
   }
   const units = options.units;
   if (units !== 'in' && units !== 'mm') {
@@ -130,13 +127,10 @@ export function toResultJson(result: LayoutResult, options: ResultJsonOptions): 
     message: String(w.message),
     ...(w.field === undefined ? {} : { field: String(w.field) }),
   }));
-  const extra: Record<string, unknown> = {};
-  if (options.extra === true) {
-    for (const [key, value] of Object.entries(result)) {
-      if (CONTRACT_KEYS.has(key)) continue;
-      const copy = plainCopy(value, key);
-      if (copy !== undefined) extra[key] = copy;
-    }
-  }
-  return { kind: String(result.kind), units, templates, warnings, pipes, ...extra };
+  const own = jointFields(result, {
+    length: toUnit,
+    angle: (deg, field) => denoise(requireFinite(deg, field)),
+    count: (value, field) => requireFinite(value, field),
+  });
+  return { kind: String(result.kind), units, templates, warnings, pipes, ...own };
 }

@@ -28,14 +28,8 @@ export type ResultUnits = 'in' | 'mm';
 
 /** Options of {@link toResultJson}. */
 export interface ResultJsonOptions {
-  /** Unit of the contract lengths. */
+  /** Unit of every contract length, the joint's own fields included. */
   readonly units: ResultUnits;
-  /**
-   * Copy the result's own further fields (e.g. a miter's `pieces`, a cone's
-   * `pattern`) into the JSON unchanged; default false. They keep the units
-   * their names say (`lengthMm` stays mm), whatever `units` is.
-   */
-  readonly extra?: boolean;
 }
 
 /** One station of a template in the JSON contract: `n`, `angleDeg`, then one number per station column (`girth`, `cutback`, `axial`, ...). */
@@ -83,6 +77,6 @@ export interface ResultJson {
   readonly templates: readonly TemplateJson[];
   readonly warnings: readonly WarningJson[];
   readonly pipes: readonly PipeJson[];
-  /** Further fields of the result, present only with `extra: true`. */
-  readonly [extra: string]: unknown;
+  /** The joint's own fields by `kind` (see `toResultJson`), lengths in `units`. */
+  readonly [jointField: string]: unknown;
 }

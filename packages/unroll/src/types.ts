@@ -10,6 +10,10 @@
  * the header. For a flat pattern both are plate coordinates.
  */
 import type { GirthWarning } from '@girth/pipes';
+import type { BranchLayout } from './branch/types.js';
+import type { ConeLayout } from './cone/types.js';
+import type { MiterLayout } from './miter/types.js';
+import type { PlaneCutLayout } from './plane-cut/types.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -118,12 +122,24 @@ export interface PipeUsed {
 }
 
 /**
- * What a joint's layout returns: the templates, the pipes used and warnings.
- * Joints add their own fields (e.g. miter `pieces`, cone `pattern`).
+ * The fields every joint's layout returns: the templates, the pipes used and
+ * warnings. Each joint's result extends it with its own fields (a miter's
+ * `pieces`, a cone's `pattern`, ...); {@link LayoutResult} is their union.
  */
-export interface LayoutResult {
+export interface LayoutResultBase {
+  /** Contract kind of the joint, e.g. `branch`. */
   readonly kind: string;
   readonly templates: readonly Template[];
   readonly pipes: readonly PipeUsed[];
   readonly warnings: readonly GirthWarning[];
 }
+
+/**
+ * What a joint's layout returns, told apart by `kind` (contract values, never
+ * renamed): `branch`, `miter`, `plane-cut` (a pipe end cut to a plane) or
+ * `reducer` (a cone, concentric or eccentric by its `form`).
+ */
+export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout;
+
+/** The contract kinds of {@link LayoutResult}. */
+export type LayoutKind = LayoutResult['kind'];

@@ -6,7 +6,7 @@
  *   stretch-out pi x OD (REFERENCES.md, miter and girth); 16 stations of 22.5°
  *   (common practice).
  */
-import type { LayoutResult, StationRow, Template } from '@girth/unroll';
+import type { BranchLayout, StationRow, Template } from '@girth/unroll';
 
 /** Millimetres in one inch, exactly (international inch, 1959). */
 export const INCH = 25.4;
@@ -46,8 +46,11 @@ export function planeCutWrap(odMm: number, cutAngleDeg: number, stationCount = 1
   };
 }
 
-/** A two-template result (a wrap and a hole-like table) with pipes, a warning and extra fields. */
-export function sampleResult(): LayoutResult & { readonly pieces: unknown; readonly note: string } {
+/**
+ * A two-template branch result (a wrap and a hole-like table) with pipes, a
+ * warning and the branch's own fields: a 1 in offset and a 1/16 in gap.
+ */
+export function sampleResult(): BranchLayout {
   const od = 6.625 * INCH; // NPS 6, ASME B36.10M (recalled; REFERENCES.md)
   const wall = 0.28 * INCH; // STD
   const wrap = planeCutWrap(od, 22.5);
@@ -71,7 +74,11 @@ export function sampleResult(): LayoutResult & { readonly pieces: unknown; reado
     templates: [wrap, hole],
     pipes: [{ role: 'branch', label: 'NPS 6 STD', odMm: od, wallMm: wall, idMm: od - 2 * wall }],
     warnings: [{ code: 'SHALLOW_LATERAL', message: 'a made-up warning for the test', field: 'angleDeg' }],
-    pieces: [{ n: 1, lengthMm: 100, cutAngleDeg: 11.25 }],
-    note: 'extra text',
+    angleDeg: 67.5,
+    offsetMm: INCH,
+    fit: 'set-on',
+    contact: { branch: 'inside', header: 'outside' },
+    gapMm: INCH / 16,
+    stations: 16,
   };
 }

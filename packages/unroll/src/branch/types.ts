@@ -2,7 +2,7 @@
  * The layout of a branch joint: its two templates and what was solved.
  */
 import type { BranchContact, BranchFit } from '@girth/geometry';
-import type { LayoutResult, Template } from '../types.js';
+import type { LayoutResultBase, Template } from '../types.js';
 
 /** Options of `layoutBranch`. */
 export interface LayoutBranchOptions {
@@ -17,7 +17,7 @@ export interface LayoutBranchOptions {
  * branch OD), `templates[1]` the `header-hole` (on the header OD). The solved
  * joint is echoed: angle (degrees), offset and gap (mm), fit and contact.
  */
-export interface BranchLayout extends LayoutResult {
+export interface BranchLayout extends LayoutResultBase {
   readonly kind: 'branch';
   readonly templates: readonly [Template, Template];
   readonly angleDeg: number;

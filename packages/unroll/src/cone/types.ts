@@ -4,7 +4,7 @@
  * (0, 0).
  */
 import type { DiameterSurface } from '@girth/geometry';
-import type { LayoutResult, Point2 } from '../types.js';
+import type { LayoutResultBase, Point2 } from '../types.js';
 
 /**
  * A reducer cone, by the diameters it must match at its ends.
@@ -124,7 +124,7 @@ export interface ConePattern {
 }
 
 /** Fields common to both reducer layouts. */
-export interface ConeLayoutBase extends LayoutResult {
+export interface ConeLayoutBase extends LayoutResultBase {
   /** Contract kind of every reducer result. */
   readonly kind: 'reducer';
   /** Concentric (right cone) or eccentric (one side flat). */

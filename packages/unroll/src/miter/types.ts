@@ -2,7 +2,7 @@
  * The layout of a miter elbow: templates for each kind of piece and the cut list.
  */
 import type { CutFitSurface, MiterPieceCut, MiterStockPlan } from '@girth/geometry';
-import type { LayoutResult, Template } from '../types.js';
+import type { LayoutResultBase, Template } from '../types.js';
 
 /**
  * A miter elbow laid out. `templates[0]` is the `miter-end` wrap (both end
@@ -12,7 +12,7 @@ import type { LayoutResult, Template } from '../types.js';
  * straight length needed and the cuts in order along it. Angles in degrees,
  * lengths in mm.
  */
-export interface MiterLayout extends LayoutResult {
+export interface MiterLayout extends LayoutResultBase {
   readonly kind: 'miter';
   readonly templates: readonly Template[];
   readonly bendDeg: number;

@@ -2,14 +2,14 @@
  * The layout of a pipe end cut to meet a plane.
  */
 import type { CutFitSurface } from '@girth/geometry';
-import type { LayoutResult, Template } from '../types.js';
+import type { LayoutResultBase, Template } from '../types.js';
 
 /**
  * A plane cut laid out: one `plane-cut` wrap template on the pipe OD, with the
  * station table (`girth`, `cutback`: the ordinates). Echoes the cut: angles in
  * degrees, lengths in mm.
  */
-export interface PlaneCutLayout extends LayoutResult {
+export interface PlaneCutLayout extends LayoutResultBase {
   readonly kind: 'plane-cut';
   readonly templates: readonly [Template];
   /** Angle between the pipe axis and the plane, degrees. */
