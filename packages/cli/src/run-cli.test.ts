@@ -9,7 +9,10 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { MM_PER_INCH, resolvePipe } from '@girth/pipes';
 import { toResultJson } from '@girth/table';
 import { CAUTION } from '@girth/unroll';
-import { layoutBranch } from '@girth/unroll';
+import { describeResult, layoutBranch } from '@girth/unroll';
+
+/** How an inch job words its templates: feet-inch-sixteenths first (the CLI's default style). */
+const INCH_WORDS = { units: 'in', lengthFormat: 'ft-in', fraction: 16 } as const;
 import { GIRTH_VERSION } from './run-cli.js';
 import { JOINT_COMMANDS } from './commands/joint-commands.js';
 import { runCaptured, runJson } from './test-support/capture.js';
@@ -44,6 +47,7 @@ function col(s: StationRow, key: string): number {
 }
 interface TemplateRow {
   readonly id: string;
+  readonly title: string;
   readonly stretchOut?: number;
   readonly stations: readonly StationRow[];
 }
@@ -163,7 +167,7 @@ describe('--json is the library result contract', () => {
     const header = resolvePipe('NPS 12 STD', { unit: 'in' });
     const branch = resolvePipe('NPS 6 STD', { unit: 'in' });
     const spec = { header, branch, angleDeg: 60, offsetMm: MM_PER_INCH, fit: 'set-in' as const, gapMm: MM_PER_INCH / 16 };
-    expect(json).toEqual(JSON.parse(JSON.stringify(toResultJson(layoutBranch(spec, { stations: 24 }), { units: 'in' }))));
+    expect(json).toEqual(JSON.parse(JSON.stringify(toResultJson(describeResult(layoutBranch(spec, { stations: 24 }), INCH_WORDS), { units: 'in' }))));
     expect(template(json, 'branch-cut').stations).toHaveLength(24);
     // An offset branch falls outside B31.3 304.3.1(b): the library warns, and the JSON carries it.
     expect((json.warnings as { code: string }[]).length).toBeGreaterThan(0);
@@ -175,8 +179,18 @@ describe('--json is the library result contract', () => {
     expect(spaced).toEqual(joined);
     const header = resolvePipe('NPS 12 STD', { unit: 'in' });
     const branch = resolvePipe('NPS 6 STD', { unit: 'in' });
-    const library = toResultJson(layoutBranch({ header, branch, offsetMm: -MM_PER_INCH }, { stations: 16 }), { units: 'in' });
+    const library = toResultJson(describeResult(layoutBranch({ header, branch, offsetMm: -MM_PER_INCH }, { stations: 16 }), INCH_WORDS), { units: 'in' });
     expect(joined).toEqual(JSON.parse(JSON.stringify(library)));
+  });
+
+  it('words titles and notes in the job unit: inch jobs inch first, mm jobs mm first', async () => {
+    // 1 in = 25.4 mm exactly; the title states the offset (common practice: the job's unit first).
+    const inch = await runJson([...TEE, '--offset', '1']);
+    expect(template(inch, 'header-hole').title).toBe('Header hole: NPS 6 STD on NPS 12 STD, 90°, set-on, offset 1" (25.4 mm)');
+    const decimal = await runJson([...TEE, '--offset', '1', '--decimal']);
+    expect(template(decimal, 'header-hole').title).toBe('Header hole: NPS 6 STD on NPS 12 STD, 90°, set-on, offset 1.000" (25.4 mm)');
+    const mm = await runJson([...TEE, '--offset', '25.4', '--units', 'mm']);
+    expect(template(mm, 'header-hole').title).toBe('Header hole: NPS 6 STD on NPS 12 STD, 90°, set-on, offset 25.4 mm (1.000 in)');
   });
 
   it('a metric tee: stretch-out pi × DN 150 OD in mm', async () => {

@@ -1,4 +1,6 @@
 export * from './types.js';
+export * from './facts.js';
+export * from './describe-result.js';
 export * from './caution.js';
 export * from './wrap/sample-cut.js';
 export * from './wrap/develop-wrap.js';

@@ -11,6 +11,7 @@
  */
 import type { GirthWarning } from '@girth/pipes';
 import type { BranchLayout } from './branch/types.js';
+import type { TemplateFacts } from './facts.js';
 import type { ConeLayout } from './cone/types.js';
 import type { MiterLayout } from './miter/types.js';
 import type { PlaneCutLayout } from './plane-cut/types.js';
@@ -94,6 +95,8 @@ export interface Template {
   readonly title: string;
   /** Further lines for the title block (pipe sizes, fit, which edge to the heel). */
   readonly notes: readonly string[];
+  /** The typed facts `title` and `notes` are worded from (see `describeResult`); absent on hand-made templates. */
+  readonly facts?: TemplateFacts;
   /** For wraps: the developed length of the girth, pi x the OD wrapped, mm. */
   readonly stretchOutMm?: number;
   /** For wraps: the OD the template wraps on, mm. */

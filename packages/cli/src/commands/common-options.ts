@@ -1,7 +1,7 @@
 /**
  * Options every joint command takes: units, stations, outputs, labels.
  */
-import { GirthError, formatLength, type LengthUnit } from '@girth/pipes';
+import { GirthError, type LengthUnit } from '@girth/pipes';
 import type { DxfVersion } from '@girth/dxf';
 import type { TableLengthFormat } from '@girth/table';
 import { choiceOption, numberOption, stringOption, type OptionSpec, type ParsedArgs } from '../args.js';
@@ -78,7 +78,7 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
       stations,
       fieldPrefix: '--',
       fieldName: (name) => `--${kebab(name)}`,
-      formatLength: (mm) => formatLength(mm, { format: tableFormat, fraction }),
+      describe: { units, lengthFormat: tableFormat, fraction },
     },
     style: { units, tableFormat, fraction, dxfVersion, ...(job !== undefined ? { job } : {}), ...(piece !== undefined ? { piece } : {}) },
     request,

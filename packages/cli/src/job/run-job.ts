@@ -3,7 +3,7 @@
  * Nothing is written until every piece has been laid out without error.
  */
 import { join } from 'node:path';
-import { GirthError, formatLength } from '@girth/pipes';
+import { GirthError } from '@girth/pipes';
 import type { LayoutResult } from '@girth/unroll';
 import type { TableLengthFormat } from '@girth/table';
 import { layoutJoint } from '../joints/layout-joint.js';
@@ -58,7 +58,7 @@ export function planJob(job: Job, outDir: string): JobPlan {
       stations: piece.stations ?? job.stations ?? 16,
       fieldPrefix: `pieces[${i}].`,
       fieldName: (name) => `pieces[${i}].${name}`,
-      formatLength: (mm) => formatLength(mm, { format: tableFormat, fraction }),
+      describe: { units: job.units, lengthFormat: tableFormat, fraction },
     };
     const result = layoutJoint(piece, ctx);
     results.push({ piece: piece.piece, result });

@@ -9,6 +9,7 @@ import {
   layoutEccentricCone,
   layoutMiter,
   layoutPlaneCut,
+  describeResult,
   type LayoutResult,
 } from '@girth/unroll';
 import { readLength, readPipe, readPipeOrDiameter, renameField } from './read-inputs.js';
@@ -39,7 +40,7 @@ const FIELD_NAMES: Readonly<Record<string, string>> = {
 };
 
 /**
- * Lays out any joint.
+ * Lays out any joint, its templates worded in the job's unit (`ctx.describe`).
  * @throws GirthError for bad input, its field named as the user wrote it
  *   (`--offset` or `pieces[1].offset`).
  * @example layoutJoint({ joint: 'branch', header: 'NPS 12 STD', branch: 'NPS 6 STD' }, ctx)
@@ -47,16 +48,7 @@ const FIELD_NAMES: Readonly<Record<string, string>> = {
 export function layoutJoint(input: JointInput, ctx: JointContext): LayoutResult {
   requireInteger(ctx.stations, ctx.fieldName('stations'), 4, 360);
   try {
-    switch (input.joint) {
-      case 'branch':
-        return branch(input, ctx);
-      case 'miter':
-        return miter(input, ctx);
-      case 'cutback':
-        return cutback(input, ctx);
-      case 'reducer':
-        return reducer(input, ctx);
-    }
+    return describeResult(layoutOf(input, ctx), ctx.describe);
   } catch (error) {
     throw renameField(error, (field) => {
       // Already named as the user wrote it (`--header`, `pieces[1].header`).
@@ -65,6 +57,20 @@ export function layoutJoint(input: JointInput, ctx: JointContext): LayoutResult 
       const name = FIELD_NAMES[root] ?? (['header', 'branch', 'pipe', 'large', 'small'].includes(root) ? root : undefined);
       return name === undefined ? undefined : ctx.fieldName(name);
     });
+  }
+}
+
+/** The library's layout of one joint, worded by default (mm first). */
+function layoutOf(input: JointInput, ctx: JointContext): LayoutResult {
+  switch (input.joint) {
+    case 'branch':
+      return branch(input, ctx);
+    case 'miter':
+      return miter(input, ctx);
+    case 'cutback':
+      return cutback(input, ctx);
+    case 'reducer':
+      return reducer(input, ctx);
   }
 }
 
@@ -135,7 +141,7 @@ function reducer(input: ReducerInput, ctx: JointContext): LayoutResult {
     ...(input.includedAngle !== undefined ? { apexAngleDeg: input.includedAngle } : {}),
     ...(input.diameters !== undefined ? { diametersAt: input.diameters } : {}),
   };
-  const options = { stations: ctx.stations, formatLength: ctx.formatLength, ...(input.segments !== undefined ? { segments: input.segments } : {}) };
+  const options = { stations: ctx.stations, ...(input.segments !== undefined ? { segments: input.segments } : {}) };
   return input.eccentric === true
     ? layoutEccentricCone(spec, { ...options, ...(input.seam !== undefined ? { seam: input.seam } : {}) })
     : layoutConcentricCone(spec, options);

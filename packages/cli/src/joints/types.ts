@@ -4,6 +4,7 @@
  * flags and the job file go through the same checks and the same layout.
  */
 import type { LengthUnit } from '@girth/pipes';
+import type { DescribeOptions } from '@girth/unroll';
 
 /** A length as written: text such as `2 1/2"` or `63.5mm`, or a bare number in the job's unit. */
 export type WrittenLength = string | number;
@@ -71,6 +72,6 @@ export interface JointContext {
   readonly fieldPrefix: string;
   /** How a field is named in errors: `--header` on the command line, `pieces[2].header` in a job. */
   readonly fieldName: (name: string) => string;
-  /** How lengths are written in notes on the templates (the job's unit and style). */
-  readonly formatLength: (mm: number) => string;
+  /** How the templates' titles and notes word lengths: the job's unit first, in its style. */
+  readonly describe: DescribeOptions;
 }

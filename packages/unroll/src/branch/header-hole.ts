@@ -4,6 +4,7 @@
 import { hitGenerator, type BranchGeometry, type GeneratorHit } from '@girth/geometry';
 import type { PathPart, Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
 import { sampleCut } from '../wrap/sample-cut.js';
+import type { TemplateFacts } from '../facts.js';
 
 /** Cap height of the labels on a hole template, mm. */
 export const HOLE_LABEL_HEIGHT_MM = 5;
@@ -19,6 +20,8 @@ export interface HeaderHoleInput {
   readonly chordToleranceMm?: number;
   readonly title: string;
   readonly notes: readonly string[];
+  /** The typed facts `title` and `notes` were worded from, kept on the template. */
+  readonly facts?: TemplateFacts;
 }
 
 /**
@@ -95,6 +98,7 @@ export function developHeaderHole(input: HeaderHoleInput): Template {
     kind: 'hole',
     title: input.title,
     notes: input.notes,
+    ...(input.facts === undefined ? {} : { facts: input.facts }),
     cut: [{ kind: 'polyline', points: outline, closed: true }],
     stationLines,
     marks,

@@ -3,6 +3,7 @@ import fc from 'fast-check';
 import { frustumNormal, makeConeFrustum, makeConeSheet, maxPlateThicknessMm, sheetElement } from '@girth/geometry';
 import type { Arc2, Point2, Segment2 } from '../types.js';
 import { layoutConcentricCone } from './concentric.js';
+import { describeResult } from '../describe-result.js';
 import { unfoldStrip } from './unfold-strip.js';
 import { d2, expectNear, reducerArb } from './test-support/cone-test-support.js';
 
@@ -187,16 +188,15 @@ describe('concentric cone: segments', () => {
 
 describe('concentric cone: template', () => {
   it('carries labels, station lines on the radii, notes with the dimensions and no caution of their own', () => {
-    const r = layoutConcentricCone(
-      { largeDiameterMm: 219.1, smallDiameterMm: 168.3, lengthMm: 152, thicknessMm: 6, largeLabel: 'NPS 8 STD', smallLabel: 'NPS 6 STD' },
-      { formatLength: (mm) => `${(mm / 25.4).toFixed(3)} in` },
-    );
-    const t = r.templates[0]!;
+    const r = layoutConcentricCone({ largeDiameterMm: 219.1, smallDiameterMm: 168.3, lengthMm: 152, thicknessMm: 6, largeLabel: 'NPS 8 STD', smallLabel: 'NPS 6 STD' });
+    const t = describeResult(r, { units: 'in' }).templates[0]!;
     expect(t.id).toBe('cone-pattern');
     expect(t.kind).toBe('flat');
     expect(t.title).toBe('Concentric cone: NPS 8 STD to NPS 6 STD');
     expect(t.labels.filter((l) => l.text === 'SEAM')).toHaveLength(2);
-    expect(t.notes.some((x) => x.includes(`${(r.pattern.outerRadius / 25.4).toFixed(3)} in`))).toBe(true);
+    // An inch job reads inches first (1 in = 25.4 mm exactly), mm in brackets.
+    expect(t.notes.some((x) => x.includes(`outer radius ${(r.pattern.outerRadius / 25.4).toFixed(3)}" (${r.pattern.outerRadius.toFixed(1)} mm)`))).toBe(true);
+    expect(r.templates[0]!.notes.some((x) => x.includes(`outer radius ${r.pattern.outerRadius.toFixed(1)} mm (${(r.pattern.outerRadius / 25.4).toFixed(3)} in)`))).toBe(true);
     // No caution in the notes (the exporters print `CAUTION` once per sheet, file and table; a caution in the notes showed twice).
     expect(t.notes.filter((x) => /caution/i.test(x))).toEqual([]);
     const outer = t.cut[0] as Arc2;

@@ -4,7 +4,8 @@
  */
 import { sheetElement } from '@girth/geometry';
 import type { Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
-import { coneTitle, commonConeNotes, deg, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
+import { angleFact, factLine, lengthFact, textLine, worded, type FactLine } from '../facts.js';
+import { coneTitle, commonConeNotes, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
 import { coneResultBase } from './internal/cone-result.js';
 import { arcExtremePoints, boundsOfPoints } from './internal/plate-frame.js';
 import { resolveCone } from './internal/resolve-cone.js';
@@ -60,7 +61,6 @@ export function layoutConcentricCone(spec: ConeSpec, options: ConeLayoutOptions 
   const k = cone.segments;
   const perPiece = N / k;
   const pieceSweepDeg = pattern.sweepDeg / k;
-  const f = cone.formatLength;
   const common = commonConeNotes(cone, 2 * Math.PI * meanR, 2 * Math.PI * meanr);
 
   const pieces: ConcentricConePiece[] = [];
@@ -111,15 +111,14 @@ export function layoutConcentricCone(spec: ConeSpec, options: ConeLayoutOptions 
       innerRiseMm: pattern.innerRadius * (1 - Math.cos(half)),
     };
     pieces.push(piece);
-    const notes = [
+    const notes: FactLine[] = [
       ...common,
-      `Pattern: outer radius ${f(pattern.outerRadius)}, inner radius ${f(pattern.innerRadius)}, sweep ${deg(pattern.sweepDeg)}, slant height ${f(slant)}.`,
+      factLine`Pattern: outer radius ${lengthFact(pattern.outerRadius)}, inner radius ${lengthFact(pattern.innerRadius)}, sweep ${angleFact(pattern.sweepDeg, 2)}, slant height ${lengthFact(slant)}.`,
       ...(k > 1
-        ? [`Piece ${j + 1} of ${k}: sweep ${deg(pieceSweepDeg)}, from ${deg(piece.startAngleDeg)} to ${deg(piece.endAngleDeg)} around the cone.`]
+        ? [factLine`Piece ${j + 1} of ${k}: sweep ${angleFact(pieceSweepDeg, 2)}, from ${angleFact(piece.startAngleDeg, 2)} to ${angleFact(piece.endAngleDeg, 2)} around the cone.`]
         : []),
-      `Plate ${f(piece.widthMm)} x ${f(piece.heightMm)}; outer arc chord ${f(piece.outerChordMm)}, rise ${f(piece.outerRiseMm)}; ` +
-        `inner arc chord ${f(piece.innerChordMm)}, rise ${f(piece.innerRiseMm)}; arc centre at (${f(center[0])}, ${f(center[1])}) from the plate corner.`,
-      `${N} stations around the cone, every ${deg(360 / N)}; station 1 on the seam, numbers rising to the left (seen from outside); station lines are elements ${f(slant)} long.`,
+      factLine`Plate ${lengthFact(piece.widthMm)} x ${lengthFact(piece.heightMm)}; outer arc chord ${lengthFact(piece.outerChordMm)}, rise ${lengthFact(piece.outerRiseMm)}; inner arc chord ${lengthFact(piece.innerChordMm)}, rise ${lengthFact(piece.innerRiseMm)}; arc centre at (${lengthFact(center[0])}, ${lengthFact(center[1])}) from the plate corner.`,
+      factLine`${N} stations around the cone, every ${angleFact(360 / N, 2)}; station 1 on the seam, numbers rising to the left (seen from outside); station lines are elements ${lengthFact(slant)} long.`,
     ];
     const outerStart = at(pattern.outerRadius, startDeg);
     const outerEnd = at(pattern.outerRadius, endDeg);
@@ -128,8 +127,7 @@ export function layoutConcentricCone(spec: ConeSpec, options: ConeLayoutOptions 
     templates.push({
       id: piece.templateId,
       kind: 'flat',
-      title: coneTitle(cone, j),
-      notes,
+      ...worded({ title: textLine(coneTitle(cone, j)), notes }),
       cut: [
         { kind: 'arc', center, radiusMm: pattern.outerRadius, startDeg, endDeg },
         { kind: 'segment', from: outerEnd, to: innerEnd },

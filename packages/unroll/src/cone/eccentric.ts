@@ -4,7 +4,8 @@
  */
 import { frustumNormal, norm, sheetElement, sub, type ConeElement, type Vec3 } from '@girth/geometry';
 import type { PathPart, Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
-import { coneTitle, commonConeNotes, deg, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
+import { angleFact, factLine, lengthFact, textLine, worded, type FactLine } from '../facts.js';
+import { coneTitle, commonConeNotes, CONE_LABEL_HEIGHT_MM } from './internal/cone-text.js';
 import { coneResultBase } from './internal/cone-result.js';
 import { boundsOfPoints, movePoint, toPlateOrigin, uprightRotation } from './internal/plate-frame.js';
 import { resolveCone, resolveEccentricOptions, type ResolvedCone } from './internal/resolve-cone.js';
@@ -61,7 +62,6 @@ export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricC
   const stepRad = TWO_PI / (N * m);
   const seamRad = seam === 'flat-side' ? 0 : Math.PI;
   const flatIndex = seam === 'flat-side' ? 0 : (N * m) / 2; // grid index of the flat side from the seam
-  const f = cone.formatLength;
   const thetaAt = (index: number): number => seamRad + index * stepRad;
 
   const largeGirth = curveLength(cone, (e) => e.large, N * m);
@@ -159,13 +159,15 @@ export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricC
     templates.push({
       id: piece.templateId,
       kind: 'flat',
-      title: coneTitle(cone, j),
-      notes: eccentricNotes(cone, common, piece, j, {
-        m,
-        seamOnFlat: seam === 'flat-side',
-        flatMm: dist(flatEl.large, flatEl.small),
-        oppositeMm: dist(oppositeEl.large, oppositeEl.small),
-        maxChordErrorMm,
+      ...worded({
+        title: textLine(coneTitle(cone, j)),
+        notes: eccentricNotes(cone, common, piece, j, {
+          m,
+          seamOnFlat: seam === 'flat-side',
+          flatMm: dist(flatEl.large, flatEl.small),
+          oppositeMm: dist(oppositeEl.large, oppositeEl.small),
+          maxChordErrorMm,
+        }),
       }),
       cut: [{ kind: 'polyline', points: [...large, ...[...small].reverse()], closed: true }],
       stationLines,
@@ -194,7 +196,7 @@ export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricC
 
 function eccentricNotes(
   cone: ResolvedCone,
-  common: readonly string[],
+  common: readonly FactLine[],
   piece: ConePiece,
   j: number,
   x: {
@@ -204,18 +206,18 @@ function eccentricNotes(
     readonly oppositeMm: number;
     readonly maxChordErrorMm: number;
   },
-): readonly string[] {
-  const f = cone.formatLength;
+): readonly FactLine[] {
   const N = cone.stations;
   return [
     ...common,
-    `Flat side: element ${f(x.flatMm)}, parallel to the axis; opposite element ${f(x.oppositeMm)}. ` +
-      (x.seamOnFlat ? 'Seam on the flat side.' : 'Seam opposite the flat side, on the longest element.'),
-    ...(cone.segments > 1 ? [`Piece ${j + 1} of ${cone.segments}: from ${deg(piece.startAngleDeg)} to ${deg(piece.endAngleDeg)} around the cone from the seam.`] : []),
-    `Triangulated in ${N} stations (every ${deg(360 / N)}): elements join matching stations, diagonals run from each large-end station ` +
-      `to the next small-end station; true lengths in the table. Outline through ${x.m} sub-stations per station, ` +
-      `within ${f(x.maxChordErrorMm)} of the true edge.`,
-    `Plate ${f(piece.widthMm)} x ${f(piece.heightMm)}. Station 1 on the seam, numbers rising to the left (seen from outside).`,
+    factLine`Flat side: element ${lengthFact(x.flatMm)}, parallel to the axis; opposite element ${lengthFact(x.oppositeMm)}. ${
+      x.seamOnFlat ? 'Seam on the flat side.' : 'Seam opposite the flat side, on the longest element.'
+    }`,
+    ...(cone.segments > 1 ? [factLine`Piece ${j + 1} of ${cone.segments}: from ${angleFact(piece.startAngleDeg, 2)} to ${angleFact(piece.endAngleDeg, 2)} around the cone from the seam.`] : []),
+    factLine`Triangulated in ${N} stations (every ${angleFact(360 / N, 2)}): elements join matching stations, diagonals run from each large-end station ${
+      'to the next small-end station; true lengths in the table.'
+    } Outline through ${x.m} sub-stations per station, within ${lengthFact(x.maxChordErrorMm)} of the true edge.`,
+    factLine`Plate ${lengthFact(piece.widthMm)} x ${lengthFact(piece.heightMm)}. Station 1 on the seam, numbers rising to the left (seen from outside).`,
   ];
 }
 

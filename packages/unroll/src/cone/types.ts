@@ -50,8 +50,6 @@ export interface ConeLayoutOptions {
    * station count must be a multiple of it, so every joint lies on a station.
    */
   readonly segments?: number;
-  /** Formats a length in mm for titles and notes; default `123.45 mm`. */
-  readonly formatLength?: (mm: number) => string;
 }
 
 /** Where an eccentric cone's longitudinal seam lies: on the flat side, or opposite it on the longest element. */

@@ -7,6 +7,7 @@ import { dot, type GeneratorBundle, type GeneratorHit, type HostSurface } from '
 import type { Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
 import { sampleCut } from '../wrap/sample-cut.js';
 import { WRAP_LABEL_HEIGHT_MM, type WrapLabel } from '../wrap/develop-wrap.js';
+import type { TemplateFacts } from '../facts.js';
 
 const TWO_PI = 2 * Math.PI;
 
@@ -37,6 +38,8 @@ export interface DevelopTwoCutWrapInput {
   readonly id: string;
   readonly title: string;
   readonly notes: readonly string[];
+  /** The typed facts `title` and `notes` were worded from, kept on the template. */
+  readonly facts?: TemplateFacts;
   /** Labels placed halfway along the piece at their station angle. */
   readonly labels: readonly WrapLabel[];
 }
@@ -102,6 +105,7 @@ export function developTwoCutWrap(input: DevelopTwoCutWrapInput): Template {
     kind: 'wrap',
     title: input.title,
     notes: input.notes,
+    ...(input.facts === undefined ? {} : { facts: input.facts }),
     stretchOutMm,
     wrapOdMm: input.wrapOdMm,
     cut: [

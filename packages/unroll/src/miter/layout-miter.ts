@@ -4,6 +4,7 @@
 import { GirthError } from '@girth/pipes';
 import { hitGenerator, miterCutList, miterGeometry, type MiterCutEnd, type MiterSpec } from '@girth/geometry';
 import type { PipeUsed, Segment2, Template } from '../types.js';
+import type { TemplateFacts } from '../facts.js';
 import { developWrap, WRAP_LABEL_HEIGHT_MM, type WrapLabel } from '../wrap/develop-wrap.js';
 import { resolveCutStations, type CutLayoutOptions } from '../plane-cut/layout-options.js';
 import { developTwoCutWrap } from './develop-two-cut-wrap.js';
@@ -105,7 +106,7 @@ export function layoutMiter(spec: MiterSpec, options: CutLayoutOptions = {}): Mi
 function endTemplate(
   cut: MiterCutEnd,
   tangentMm: number,
-  o: { wrapOdMm: number; stations: number; chordToleranceMm?: number; title: string; notes: readonly string[] },
+  o: { wrapOdMm: number; stations: number; chordToleranceMm?: number; title: string; notes: readonly string[]; facts: TemplateFacts },
 ): Template {
   const t = developWrap({ bundle: cut.bundle, host: cut.host, id: 'miter-end', labels: PIECE_LABELS, ...o });
   // Axial position of the square line (the long point), from the piece's tangent point toward the cut.

@@ -54,7 +54,7 @@ export function layoutPlaneCut(spec: PlaneCutSpec, options: CutLayoutOptions = {
   const pipe: PipeUsed = { role: 'pipe', label: g.pipe.label, odMm: g.pipe.odMm, wallMm: g.pipe.wallMm, idMm: g.pipe.idMm };
   return {
     kind: 'plane-cut',
-    templates: [{ ...draft, title: text.title, notes: text.notes }],
+    templates: [{ ...draft, title: text.title, notes: text.notes, facts: text.facts }],
     pipes: [pipe],
     warnings: g.warnings,
     angleDeg: g.angleDeg,

@@ -6,6 +6,7 @@ import type { GeneratorBundle, HostSurface } from '@girth/geometry';
 import { GirthError } from '@girth/pipes';
 import type { Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
 import { sampleCut } from './sample-cut.js';
+import type { TemplateFacts } from '../facts.js';
 
 const TWO_PI = 2 * Math.PI;
 
@@ -37,6 +38,8 @@ export interface DevelopWrapInput {
   readonly id: string;
   readonly title: string;
   readonly notes: readonly string[];
+  /** The typed facts `title` and `notes` were worded from, kept on the template. */
+  readonly facts?: TemplateFacts;
   /** Labels to place; default HEEL at station 1 and, when N is even, TOE at 180°. */
   readonly labels?: readonly WrapLabel[];
 }
@@ -99,6 +102,7 @@ export function developWrap(input: DevelopWrapInput): Template {
     kind: 'wrap',
     title: input.title,
     notes: input.notes,
+    ...(input.facts === undefined ? {} : { facts: input.facts }),
     stretchOutMm,
     wrapOdMm: input.wrapOdMm,
     cut: [{ kind: 'polyline', points, closed: false }],

@@ -3,6 +3,7 @@
  * the caution, `CAUTION`).
  */
 import type { GirthWarning } from '@girth/pipes';
+import { angleFact, factLine, lengthFact, textLine, type FactLine } from '../../facts.js';
 import type { ResolvedCone } from './resolve-cone.js';
 
 /** Cap height of the labels a cone pattern places itself (SEAM, FLAT SIDE), mm. */
@@ -56,20 +57,19 @@ export function coneTitle(cone: ResolvedCone, pieceIndex: number): string {
  * Note lines both forms share: size, length and angle, plate and mean surface.
  * @example commonConeNotes(cone, 213.1, 162.3)[0]
  */
-export function commonConeNotes(cone: ResolvedCone, meanLargeGirthMm: number, meanSmallGirthMm: number): readonly string[] {
-  const f = cone.formatLength;
+export function commonConeNotes(cone: ResolvedCone, meanLargeGirthMm: number, meanSmallGirthMm: number): readonly FactLine[] {
   const angle =
     cone.form === 'concentric'
-      ? `apex angle ${deg(cone.apexAngleDeg)} (half-angle ${deg(cone.apexAngleDeg / 2)})`
-      : `apex angle ${deg(cone.apexAngleDeg)} between the flat side and the opposite element`;
+      ? factLine`apex angle ${angleFact(cone.apexAngleDeg, 2)} (half-angle ${angleFact(cone.apexAngleDeg / 2, 2)})`
+      : factLine`apex angle ${angleFact(cone.apexAngleDeg, 2)} between the flat side and the opposite element`;
   const surface = { outside: 'outside', inside: 'inside', mean: 'mean' }[cone.diametersAt];
   const plate =
     cone.thicknessMm > 0
-      ? `Plate ${f(cone.thicknessMm)}: developed on the mean surface, half the plate thickness from the ${surface} surface measured square to the cone.`
-      : 'Thin sheet (thickness 0): developed on the given surface.';
+      ? factLine`Plate ${lengthFact(cone.thicknessMm)}: developed on the mean surface, half the plate thickness from the ${surface} surface measured square to the cone.`
+      : textLine('Thin sheet (thickness 0): developed on the given surface.');
   return [
-    `Ends: ${f(cone.largeDiameterMm)} and ${f(cone.smallDiameterMm)} on the ${surface} surface; ${f(cone.lengthMm)} between the end planes; ${angle}.`,
+    factLine`Ends: ${lengthFact(cone.largeDiameterMm)} and ${lengthFact(cone.smallDiameterMm)} on the ${surface} surface; ${lengthFact(cone.lengthMm)} between the end planes; ${angle}.`,
     plate,
-    `Edge girths on the mean surface: large end ${f(meanLargeGirthMm)}, small end ${f(meanSmallGirthMm)}.`,
+    factLine`Edge girths on the mean surface: large end ${lengthFact(meanLargeGirthMm)}, small end ${lengthFact(meanSmallGirthMm)}.`,
   ];
 }

@@ -40,11 +40,10 @@ export interface ResolvedCone {
   readonly segments: number;
   readonly largeLabel: string;
   readonly smallLabel: string;
-  readonly formatLength: (mm: number) => string;
 }
 
 /**
- * Default length format of titles and notes: two decimals in mm.
+ * Default name of a reducer end given by its diameter: two decimals in mm.
  * @example formatMm(219.1) // '219.10 mm'
  */
 export const formatMm = (mm: number): string => `${mm.toFixed(2)} mm`;
@@ -109,12 +108,8 @@ export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: Co
       options.segments,
     );
   }
-  const formatLength = options.formatLength ?? formatMm;
-  if (typeof formatLength !== 'function') {
-    throw new GirthError('BAD_OPTION', 'formatLength', 'formatLength: expected a function from mm to text', formatLength);
-  }
   const label = (value: unknown, field: string, diameterMm: number): string => {
-    if (value === undefined) return `${SURFACE_PREFIX[diametersAt]} ${formatLength(diameterMm)}`;
+    if (value === undefined) return `${SURFACE_PREFIX[diametersAt]} ${formatMm(diameterMm)}`;
     if (typeof value !== 'string' || value.trim() === '') {
       throw new GirthError('BAD_OPTION', field, `${field}: expected a pipe name as text`, value);
     }
@@ -135,7 +130,6 @@ export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: Co
     segments,
     largeLabel: label(spec.largeLabel, 'largeLabel', largeDiameterMm),
     smallLabel: label(spec.smallLabel, 'smallLabel', smallDiameterMm),
-    formatLength,
   };
 }
 
