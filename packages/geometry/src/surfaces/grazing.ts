@@ -16,11 +16,12 @@ const GRAZE_SCAN_STEPS = 96;
 
 /**
  * Largest |n · d| (the sine of the angle between a generator and the host's
- * tangent plane where it first meets it) that still counts as a graze. 1e-7
- * rad: the branch side flush with the host side within about 1e-14 of its
- * size, the same order as the closed forms' slack.
+ * tangent plane where it first meets it) that still counts as a graze: 1e-6,
+ * a pipe side flush with the host within about 5e-13 of the host's size. The
+ * smallest |n · d| that rounding lets the search see at a true graze is about
+ * 1e-7 on metre-sized joints, so this keeps a margin above it.
  */
-export const GRAZE_SINE_TOL = 1e-7;
+export const GRAZE_SINE_TOL = 1e-6;
 
 /** Width to which a graze is located by the numeric search, radians (~1e-10 mm on a 1 m pipe). */
 const GRAZE_PHI_TOL_RAD = 1e-13;
@@ -38,9 +39,10 @@ const SAME_GRAZE_RAD = 1e-9;
  * `normal`, so it holds for surfaces of any degree (a torus is quartic):
  * along the cut, g(phi) = |n · d| (n the host normal at the first hit, d the
  * generator direction) is zero exactly where the generator touches the host;
- * g is sampled every 3.75°, each local dip is refined by golden-section search
- * to 1e-13 rad, and kept when g ≤ {@link GRAZE_SINE_TOL} there or the first
- * root is flagged tangent.
+ * g is taken with no tangency tolerance, sampled every 3.75°, each local dip
+ * refined by golden-section search to 1e-13 rad, and kept when
+ * g ≤ {@link GRAZE_SINE_TOL} there or the first root is flagged tangent
+ * (within `options.eps`).
  *
  * @throws GirthError `BAD_OPTION` (field `host`) for a kind missing from the table.
  * @example findGrazingPhis(branchBundle(Math.PI / 2, 0, 100), header100) // [π/2, 3π/2]
@@ -54,14 +56,15 @@ export function findGrazingPhis<S extends HostShape = HostSurface>(
   if (ops.grazingPhisRad !== undefined) return ops.grazingPhisRad(host, bundle);
 
   const d = bundle.axisDirection;
-  // |n · d| at the first hit; 0 when that root is flagged tangent; +∞ on a miss.
+  // |n · d| at the first hit with no tangency tolerance (so it keeps falling to the graze itself); +∞ on a miss.
+  const exact = { ...options, eps: 0 };
   const g = (phiRad: number): number => {
     const line = generatorLine(bundle, phiRad);
-    const first = lineRoots(host, line, options)[0];
+    const first = lineRoots(host, line, exact)[0];
     if (first === undefined) return Number.POSITIVE_INFINITY;
-    if (first.tangent) return 0;
     return Math.abs(dot(ops.normal(host, addScaled(line.origin, d, first.tMm)), d));
   };
+  const tangentAt = (phiRad: number): boolean => lineRoots(host, generatorLine(bundle, phiRad), options)[0]?.tangent === true;
 
   const step = TWO_PI / GRAZE_SCAN_STEPS;
   const values = Array.from({ length: GRAZE_SCAN_STEPS }, (_, i) => g(i * step));
@@ -73,7 +76,7 @@ export function findGrazingPhis<S extends HostShape = HostSurface>(
     if (!(here <= prev && here <= next && Number.isFinite(here))) continue;
     const refined = here === 0 ? { x: i * step, fx: 0 } : minimizeOnInterval(g, (i - 1) * step, (i + 1) * step, GRAZE_PHI_TOL_RAD);
     const best = refined.fx < here ? refined : { x: i * step, fx: here };
-    if (!(best.fx <= GRAZE_SINE_TOL)) continue;
+    if (!(best.fx <= GRAZE_SINE_TOL || tangentAt(best.x))) continue;
     const p = ((best.x % TWO_PI) + TWO_PI) % TWO_PI;
     const phi = TWO_PI - p < SAME_GRAZE_RAD ? 0 : p;
     if (!out.some((q) => Math.abs(q - phi) < SAME_GRAZE_RAD || TWO_PI - Math.abs(q - phi) < SAME_GRAZE_RAD)) out.push(phi);
