@@ -3,8 +3,10 @@
  * and each generator is cut where it first meets the host surface.
  */
 import { addScaled, type Vec3 } from './vec3.js';
-import { intersectLine } from './surfaces/line-intersection.js';
-import type { GeneratorBundle, HostSurface, Line3 } from './types.js';
+import { lineRoots, type LineSurfaceOptions } from './surfaces/line-intersection.js';
+import type { HostSurface } from './surfaces/table.js';
+import type { HostShape } from './surfaces/types.js';
+import type { GeneratorBundle, Line3 } from './types.js';
 
 /**
  * The generator line of `bundle` at station angle `phiRad` (0 at the heel,
@@ -27,29 +29,35 @@ export interface GeneratorHit {
   readonly axialMm: number;
   /** The hit point in 3D, mm. */
   readonly point: Vec3;
-  /** True when the generator only grazes the host (a double root): a kink of the cut. */
+  /** True when the generator only touches the host here (its first root is flagged tangent by the host's `intersectLine`): a kink of the cut. */
   readonly grazing: boolean;
 }
 
 /**
  * The first point where the generator at `phiRad`, coming from the pipe's body,
  * meets `host`; `undefined` when it misses the host altogether.
+ *
+ * The host's operations are looked up by its `kind` in `options.surfaces`
+ * (`SURFACES` by default); pass a larger table to cut against a kind of your
+ * own: `hitGenerator(bundle, myHost, phi, { surfaces: { ...SURFACES, mine: myOps } })`.
+ *
+ * @param options.eps relative tangency tolerance (`TANGENCY_REL_EPS` by default).
+ * @throws GirthError `BAD_OPTION` (field `host`) for a kind missing from the table.
  * @example hitGenerator(bundle, header, 0)?.axialMm
  */
-export function hitGenerator(
+export function hitGenerator<S extends HostShape = HostSurface>(
   bundle: GeneratorBundle,
-  host: HostSurface,
+  host: S,
   phiRad: number,
-  options: { readonly eps?: number } = {},
+  options: LineSurfaceOptions<S> = {},
 ): GeneratorHit | undefined {
   const line = generatorLine(bundle, phiRad);
-  const roots = intersectLine(host, line, options);
-  const t = roots[0];
-  if (t === undefined) return undefined;
+  const first = lineRoots(host, line, options)[0];
+  if (first === undefined) return undefined;
   return {
     phiRad,
-    axialMm: t,
-    point: addScaled(line.origin, line.direction, t),
-    grazing: roots.length === 2 && roots[0] === roots[1],
+    axialMm: first.tMm,
+    point: addScaled(line.origin, line.direction, first.tMm),
+    grazing: first.tangent,
   };
 }

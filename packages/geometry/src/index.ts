@@ -3,7 +3,7 @@ export * from './types.js';
 export * from './tolerances.js';
 export * from './generators.js';
 export * from './pipe-section.js';
-export * from './surfaces/line-intersection.js';
+export * from './surfaces/index.js';
 export * from './cone/index.js';
 export * from './branch/index.js';
 export * from './plane-cut/index.js';

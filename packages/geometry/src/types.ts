@@ -10,32 +10,10 @@ export interface Line3 {
   readonly direction: Vec3;
 }
 
-/**
- * A right circular cylinder (infinite), as the host a pipe is cut to meet.
- * `axisDirection` is a unit vector.
- */
-export interface CylinderSurface {
-  readonly kind: 'cylinder';
-  readonly radius: number;
-  readonly axisPoint: Vec3;
-  readonly axisDirection: Vec3;
-}
-
-/**
- * A plane through `point` with unit `normal`. The normal points to the side the
- * cut pipe comes from (the "outside" of the host).
- */
-export interface PlaneSurface {
-  readonly kind: 'plane';
-  readonly point: Vec3;
-  readonly normal: Vec3;
-}
-
-/**
- * A surface that a pipe end can be cut to meet. More kinds (cone, sphere,
- * ellipsoid, torus) join this union later; every consumer switches on `kind`.
- */
-export type HostSurface = CylinderSurface | PlaneSurface;
+export type { CylinderSurface } from './surfaces/cylinder.js';
+export type { PlaneSurface } from './surfaces/plane.js';
+export type { ConeSurface } from './surfaces/cone.js';
+export type { HostSurface, HostKind } from './surfaces/table.js';
 
 /**
  * The cut pipe as a bundle of generator lines: its axis, the radius of the

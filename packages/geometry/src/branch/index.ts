@@ -1,6 +1,5 @@
 export * from './types.js';
 export * from './resolve-branch-spec.js';
 export * from './branch-frame.js';
-export * from './grazing-phis.js';
 export * from './branch-warnings.js';
 export * from './solve-branch.js';

@@ -5,10 +5,10 @@
 import { GirthError, formatLengthBoth } from '@girth/pipes';
 import { TANGENCY_REL_EPS } from '../tolerances.js';
 import { offsetSurface } from '../surfaces/line-intersection.js';
+import { findGrazingPhis } from '../surfaces/grazing.js';
 import type { CylinderSurface } from '../types.js';
 import { branchAxisDirection, branchBundle } from './branch-frame.js';
 import { branchWarnings } from './branch-warnings.js';
-import { grazingPhisRad } from './grazing-phis.js';
 import { resolveBranchSpec } from './resolve-branch-spec.js';
 import type { BranchGeometry, BranchPipeSection, BranchSpec, PipeFace, ResolvedBranchSpec } from './types.js';
 
@@ -32,7 +32,8 @@ const FLUSH_REL_SLACK = TANGENCY_REL_EPS / 4;
  * branch surface (ID for set-on, OD for set-in) on the header OD.
  *
  * A branch side flush with the header side (|offset| + r = R) is allowed: its
- * grazing generators are kinks, listed in closed form.
+ * grazing generators are kinks, listed by `findGrazingPhis` (closed form for
+ * a cylinder host).
  *
  * @throws GirthError every error of {@link resolveBranchSpec}, and
  *   `BRANCH_TOO_LARGE` (field `branch`) when the contacting branch surface is
@@ -61,6 +62,14 @@ export function solveBranch(spec: BranchSpec): BranchGeometry {
   if (s.contact.header !== 'outside' || s.gapMm > 0) checkFits(s, cutRadiusMm, headerOdRadiusMm, 'outside', 0);
 
   const bundle = branchBundle(angleRad, s.offsetMm, cutRadiusMm);
+  // The header OD, developed from its top line (+z), girth growing toward +y.
+  const holeHost: CylinderSurface = {
+    kind: 'cylinder',
+    radius: headerOdRadiusMm,
+    axisPoint: [0, 0, 0],
+    axisDirection: [1, 0, 0],
+    zeroGirthDirection: [0, 0, 1],
+  };
   return {
     kind: 'branch-geometry',
     spec: s,
@@ -69,10 +78,10 @@ export function solveBranch(spec: BranchSpec): BranchGeometry {
     cutRadiusMm,
     cutBundle: bundle,
     cutHost,
-    cutKinkPhisRad: grazingPhisRad(s.offsetMm, cutRadiusMm, cutHostRadiusMm),
+    cutKinkPhisRad: findGrazingPhis(bundle, cutHost),
     holeBundle: bundle,
-    holeHost: { kind: 'cylinder', radius: headerOdRadiusMm, axisPoint: [0, 0, 0], axisDirection: [1, 0, 0] },
-    holeKinkPhisRad: grazingPhisRad(s.offsetMm, cutRadiusMm, headerOdRadiusMm),
+    holeHost,
+    holeKinkPhisRad: findGrazingPhis(bundle, holeHost),
     warnings: branchWarnings(s),
   };
 }

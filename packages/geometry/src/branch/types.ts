@@ -80,7 +80,7 @@ export interface BranchGeometry {
   readonly cutKinkPhisRad: readonly number[];
   /** The hole's outline as generator lines (same surface as the cut). */
   readonly holeBundle: GeneratorBundle;
-  /** The header OD, on which the hole is marked. */
+  /** The header OD, on which the hole is marked; its `zeroGirthDirection` (+z) is the top line its development starts from. */
   readonly holeHost: HostSurface;
   /** Station angles where a hole generator grazes the header OD, radians in [0, 2π). */
   readonly holeKinkPhisRad: readonly number[];

@@ -2,3 +2,4 @@ export * from './types.js';
 export * from './frustum.js';
 export * from './apex-angle.js';
 export * from './sheet.js';
+export * from './frustum-surface.js';

@@ -1,63 +1,52 @@
 /**
- * Where a straight line meets a host surface, in closed form.
+ * Where a straight line meets a host surface, the host offset, its normal and
+ * its development, each looked up by kind in the surface table.
  */
 import { GirthError } from '@girth/pipes';
-import { addScaled, dot, sub, type Vec3 } from '../vec3.js';
 import { TANGENCY_REL_EPS } from '../tolerances.js';
-import type { CylinderSurface, HostSurface, Line3, PlaneSurface } from '../types.js';
+import type { Line3 } from '../types.js';
+import type { Vec3 } from '../vec3.js';
+import { surfaceOpsFor, type HostSurface, type SurfaceTableOption } from './table.js';
+import type { FlatPoint, HostShape, LineRoot } from './types.js';
+
+/** Options of the line–surface functions: a tangency tolerance and the surface table. */
+export interface LineSurfaceOptions<S extends HostShape = HostSurface> extends SurfaceTableOption<S> {
+  /** Relative tangency tolerance, see {@link TANGENCY_REL_EPS} (the default). */
+  readonly eps?: number;
+}
+
+/**
+ * Every place where `line` meets `surface`, ascending, each flagged when the
+ * line only touches the surface there.
+ *
+ * @throws GirthError `BAD_OPTION` (field `host`) for a kind missing from the table.
+ * @example
+ * lineRoots({ kind: 'cylinder', radius: 1, axisPoint: [0,0,0], axisDirection: [1,0,0] },
+ *           { origin: [0,1,5], direction: [0,0,-1] }) // [{ tMm: 5, tangent: true }]
+ */
+export function lineRoots<S extends HostShape = HostSurface>(surface: S, line: Line3, options: LineSurfaceOptions<S> = {}): readonly LineRoot[] {
+  return surfaceOpsFor(surface, options.surfaces).intersectLine(surface, line, options.eps ?? TANGENCY_REL_EPS);
+}
 
 /**
  * The line parameters `t` (mm along the unit direction) at which `line` meets
- * `surface`, ascending. A grazing (tangent) line gives one root twice;
- * a line that misses gives an empty array.
+ * `surface`, ascending. A grazing (tangent) line gives its root twice;
+ * a line that misses gives an empty array. See {@link lineRoots} for the
+ * roots with their tangency flags.
  *
  * @param options.eps relative tolerance for tangency, see {@link TANGENCY_REL_EPS}.
+ * @throws GirthError `BAD_OPTION` (field `host`) for a kind missing from the table.
  * @example
  * intersectLine({ kind: 'plane', point: [0,0,0], normal: [0,0,1] },
  *               { origin: [0,0,10], direction: [0,0,-1] }) // [10]
  */
-export function intersectLine(
-  surface: HostSurface,
-  line: Line3,
-  options: { readonly eps?: number } = {},
-): readonly number[] {
-  switch (surface.kind) {
-    case 'cylinder':
-      return intersectCylinder(surface, line, options.eps ?? TANGENCY_REL_EPS);
-    case 'plane':
-      return intersectPlane(surface, line);
+export function intersectLine<S extends HostShape = HostSurface>(surface: S, line: Line3, options: LineSurfaceOptions<S> = {}): readonly number[] {
+  const out: number[] = [];
+  for (const r of lineRoots(surface, line, options)) {
+    out.push(r.tMm);
+    if (r.tangent) out.push(r.tMm);
   }
-}
-
-function intersectPlane(plane: PlaneSurface, line: Line3): readonly number[] {
-  const denom = dot(plane.normal, line.direction);
-  if (denom === 0) return [];
-  return [dot(plane.normal, sub(plane.point, line.origin)) / denom];
-}
-
-function intersectCylinder(cyl: CylinderSurface, line: Line3, eps: number): readonly number[] {
-  // Remove the axial components; solve |w0 + t w1|² = R² in the plane square to the axis.
-  const a = cyl.axisDirection;
-  const rel = sub(line.origin, cyl.axisPoint);
-  const w0 = addScaled(rel, a, -dot(rel, a));
-  const w1 = addScaled(line.direction, a, -dot(line.direction, a));
-  const qa = dot(w1, w1);
-  if (qa === 0) return []; // parallel to the axis: inside or outside forever
-  const qb = dot(w0, w1); // half of the linear coefficient
-  const qc = dot(w0, w0) - cyl.radius * cyl.radius;
-  const disc = qb * qb - qa * qc;
-  const scaleSq = qa * cyl.radius * cyl.radius;
-  if (disc < -eps * scaleSq) return [];
-  if (disc <= eps * scaleSq) {
-    const t = -qb / qa;
-    return [t, t];
-  }
-  const root = Math.sqrt(disc);
-  // Numerically stable pair (no cancellation).
-  const q = qb >= 0 ? -(qb + root) : -(qb - root);
-  const t1 = q / qa;
-  const t2 = qc / q;
-  return t1 <= t2 ? [t1, t2] : [t2, t1];
+  return out;
 }
 
 /**
@@ -65,37 +54,51 @@ function intersectCylinder(cyl: CylinderSurface, line: Line3, eps: number): read
  * side the cut pipe comes from). Used for a root gap: the cut that leaves a gap
  * g normal to the host is the cut to the host offset by g.
  *
- * @throws GirthError `OUT_OF_RANGE` if a cylinder would be offset to a radius ≤ 0.
+ * @throws GirthError `OUT_OF_RANGE` (field `gap`) if no surface is left (a
+ *   cylinder offset to a radius ≤ 0); `BAD_OPTION` (field `host`) for a kind
+ *   missing from the table.
  * @example offsetSurface({ kind: 'cylinder', radius: 100, axisPoint: [0,0,0], axisDirection: [1,0,0] }, 3).radius // 103
  */
-export function offsetSurface(surface: HostSurface, distanceMm: number): HostSurface {
-  switch (surface.kind) {
-    case 'cylinder': {
-      const radius = surface.radius + distanceMm;
-      if (!(radius > 0)) {
-        throw new GirthError('OUT_OF_RANGE', 'gap', `gap: an offset of ${distanceMm} mm leaves no surface of radius ${surface.radius} mm`, distanceMm);
-      }
-      return { ...surface, radius };
-    }
-    case 'plane':
-      return { ...surface, point: addScaled(surface.point, surface.normal, distanceMm) };
-  }
+export function offsetSurface<S extends HostShape = HostSurface>(surface: S, distanceMm: number, options: SurfaceTableOption<S> = {}): S {
+  return surfaceOpsFor(surface, options.surfaces).offset(surface, distanceMm);
 }
 
 /**
- * Unit normal of the host at a point on it, pointing outward (away from a
+ * Unit normal of the host at a point on it (mm), pointing outward (away from a
  * cylinder's axis; along a plane's normal).
+ * @throws GirthError `BAD_OPTION` (field `host`) for a kind missing from the table.
  * @example surfaceNormal({ kind: 'plane', point: [0,0,0], normal: [0,0,1] }, [5,5,0]) // [0,0,1]
  */
-export function surfaceNormal(surface: HostSurface, point: Vec3): Vec3 {
-  switch (surface.kind) {
-    case 'plane':
-      return surface.normal;
-    case 'cylinder': {
-      const rel = sub(point, surface.axisPoint);
-      const radial = addScaled(rel, surface.axisDirection, -dot(rel, surface.axisDirection));
-      const n = Math.hypot(radial[0], radial[1], radial[2]);
-      return [radial[0] / n, radial[1] / n, radial[2] / n];
-    }
-  }
+export function surfaceNormal<S extends HostShape = HostSurface>(surface: S, point: Vec3, options: SurfaceTableOption<S> = {}): Vec3 {
+  return surfaceOpsFor(surface, options.surfaces).normal(surface, point);
+}
+
+/**
+ * Where `point` (on `surface`, mm) lands when the surface is rolled out flat,
+ * `[u, v]` mm in the surface's own flat frame (a cylinder: girth from its
+ * zero-girth generator, axial from its axis point; a cone: its flat pattern
+ * with the apex at the origin).
+ * @throws GirthError `BAD_OPTION` (field `host`) when the kind is missing
+ *   from the table or does not develop (a plane, a sphere).
+ * @example developPoint(header, hit.point) // [girth, axial]
+ */
+export function developPoint<S extends HostShape = HostSurface>(surface: S, point: Vec3, options: SurfaceTableOption<S> = {}): FlatPoint {
+  const ops = surfaceOpsFor(surface, options.surfaces);
+  if (ops.develop === undefined) throw notDevelopable(surface);
+  return ops.develop(surface, point);
+}
+
+/**
+ * The inverse of {@link developPoint}: the point on `surface` (mm) that lands at `flat`.
+ * @throws GirthError `BAD_OPTION` (field `host`) when the kind is missing or cannot be developed back.
+ * @example undevelopPoint(header, [0, 25]) // the top line, 25 mm along the axis
+ */
+export function undevelopPoint<S extends HostShape = HostSurface>(surface: S, flat: FlatPoint, options: SurfaceTableOption<S> = {}): Vec3 {
+  const ops = surfaceOpsFor(surface, options.surfaces);
+  if (ops.undevelop === undefined) throw notDevelopable(surface);
+  return ops.undevelop(surface, flat);
+}
+
+function notDevelopable(surface: HostShape): Error {
+  return new GirthError('BAD_OPTION', 'host', `host: a surface of kind '${surface.kind}' does not roll out flat`, surface.kind);
 }

@@ -1,7 +1,7 @@
 /**
  * The hole in the header for a branch, developed on the header OD.
  */
-import { hitGenerator, type BranchGeometry, type GeneratorHit } from '@girth/geometry';
+import { developPoint, hitGenerator, type BranchGeometry, type GeneratorHit } from '@girth/geometry';
 import type { PathPart, Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
 import { sampleCut } from '../wrap/sample-cut.js';
 import type { TemplateFacts } from '../facts.js';
@@ -26,7 +26,8 @@ export interface HeaderHoleInput {
 
 /**
  * A `kind: 'hole'` template of the branch hole on the header OD, as a closed
- * polyline on the developed header: x = girth around the header from its top
+ * polyline on the header developed by its surface's own `develop` operation
+ * (for the header cylinder): x = girth around the header from its top
  * line (the generator at y = 0, z = +R), positive toward +y, = R · atan2(y, z);
  * y = axial position along the header from x = 0, where the branch axis (or
  * its projection, for an offset branch) crosses the header axis. Both in mm.
@@ -43,8 +44,8 @@ export interface HeaderHoleInput {
  */
 export function developHeaderHole(input: HeaderHoleInput): Template {
   const g = input.geometry;
-  const headerRadiusMm = g.spec.header.odMm / 2;
-  const flatten = (hit: GeneratorHit): Point2 => [headerRadiusMm * Math.atan2(hit.point[1], hit.point[2]), hit.point[0]];
+  // The hole host's own development: on a header, girth from the top line and axial from x = 0.
+  const flatten = (hit: GeneratorHit): Point2 => developPoint(g.holeHost, hit.point);
   const cut = sampleCut(g.holeBundle, g.holeHost, {
     stations: input.stations,
     wrapOdMm: g.spec.header.odMm,
@@ -65,7 +66,7 @@ export function developHeaderHole(input: HeaderHoleInput): Template {
     stationLines.push({ n: i + 1, angleDeg, from: [girth, 0], to: [girth, axial] });
   });
 
-  const centre = axisPiercingPoint(g, headerRadiusMm);
+  const centre = axisPiercingPoint(g);
   const xs = outline.map((p) => p[0]);
   const ys = outline.map((p) => p[1]);
   const [minX, maxX] = [Math.min(0, ...xs), Math.max(0, ...xs)];
@@ -111,10 +112,8 @@ export function developHeaderHole(input: HeaderHoleInput): Template {
   };
 }
 
-/** Where the branch axis (0, e, 0) + s b meets the header OD, developed: [R atan2(e, z), x]. */
-function axisPiercingPoint(g: BranchGeometry, headerRadiusMm: number): Point2 {
-  const e = g.spec.offsetMm;
-  const z = Math.sqrt(Math.max(0, headerRadiusMm * headerRadiusMm - e * e));
-  const b = g.branchAxisDirection;
-  return [headerRadiusMm * Math.atan2(e, z), (z / b[2]) * b[0]];
+/** Where the branch axis meets the header OD (the hole bundle's generator of radius 0), developed. */
+function axisPiercingPoint(g: BranchGeometry): Point2 {
+  const hit = hitGenerator({ ...g.holeBundle, radius: 0 }, g.holeHost, 0);
+  return hit === undefined ? [0, 0] : developPoint(g.holeHost, hit.point);
 }

@@ -9,7 +9,9 @@ import {
   hitGenerator,
   type GeneratorBundle,
   type GeneratorHit,
+  type HostShape,
   type HostSurface,
+  type SurfaceTable,
 } from '@girth/geometry';
 import type { Point2 } from '../types.js';
 import { chordDeviationModel } from '../internal/chord-deviation.js';
@@ -75,8 +77,8 @@ export interface CutSamples {
   readonly samples: readonly GeneratorHit[];
 }
 
-/** Options of {@link sampleCut}. */
-export interface SampleCutOptions {
+/** Options of {@link sampleCut}; `S` is the host's type (Girth's `HostSurface` unless a caller brings its own kind). */
+export interface SampleCutOptions<S extends HostShape = HostSurface> {
   /** Number of stations N, a whole number from 1 to {@link MAX_SAMPLE_STATIONS}. */
   readonly stations: number;
   /** OD the template wraps on, mm (> 0): the flat is x = wrapOdMm / 2 · phi, y = axial. */
@@ -97,6 +99,12 @@ export interface SampleCutOptions {
    * cutback from the long point. A hole template has no use for them.
    */
   readonly longPoints?: boolean;
+  /**
+   * The table the host's operations are looked up in, by its `kind`;
+   * `SURFACES` when left out. Pass `{ ...SURFACES, [kind]: ops }` to cut
+   * against a host kind of your own (see `SurfaceOps`).
+   */
+  readonly surfaces?: SurfaceTable<S>;
 }
 
 interface Sample {
@@ -111,29 +119,36 @@ interface Sample {
  * `kinkPhisRad` and the long points (unless `longPoints` is false) are
  * sample points exactly.
  *
+ * The host's operations come from `options.surfaces` by its kind (see
+ * `SurfaceOps`); nothing here depends on which kind it is. Kinks are not
+ * searched for here: pass them in `kinkPhisRad` (`findGrazingPhis` lists
+ * them for any host).
+ *
  * @throws GirthError `NO_INTERSECTION` (field `stations`) naming the station
  *   or the angle where a generator misses the host; `OUT_OF_RANGE` (field
  *   `joint`) when a cut would reach absurdly far (overflowing input), or (field
  *   `chordToleranceMm`) when it would need more than 200 000 points; `OUT_OF_RANGE`,
- *   `NEGATIVE`, `NOT_A_NUMBER`, `NOT_FINITE` for bad options.
+ *   `NEGATIVE`, `NOT_A_NUMBER`, `NOT_FINITE` for bad options; `BAD_OPTION`
+ *   (field `host`) for a host kind missing from the table.
  * @example
  * const cut = sampleCut(bundle, header, { stations: 16, wrapOdMm: 168.3 });
  * cut.stations[4]?.axialMm // axial position of station 5 (phi = 90°), mm
  */
-export function sampleCut(bundle: GeneratorBundle, host: HostSurface, options: SampleCutOptions): CutSamples {
+export function sampleCut<S extends HostShape = HostSurface>(bundle: GeneratorBundle, host: S, options: SampleCutOptions<S>): CutSamples {
   const n = requireInteger(options.stations, 'stations', 1, MAX_SAMPLE_STATIONS);
   const wrapOdMm = requirePositive(options.wrapOdMm, 'wrapOdMm');
   const tol = requireChordTolerance(options.chordToleranceMm);
   const kinks = (options.kinkPhisRad ?? []).map((phi, i) => normalizePhi(requireFinite(phi, `kinkPhisRad[${i}]`)));
   const radiusMm = wrapOdMm / 2;
   const flatten = options.flatten ?? ((hit: GeneratorHit): Point2 => [radiusMm * hit.phiRad, hit.axialMm]);
+  const hitOptions = { surfaces: options.surfaces };
 
   let cuts = 0;
   const at = (phiRad: number): Sample => {
     if (++cuts > MAX_GENERATOR_CUTS) {
       throw new GirthError('OUT_OF_RANGE', 'chordToleranceMm', `chordToleranceMm: the cut would need more than ${MAX_GENERATOR_CUTS} points at ${tol} mm; check the sizes and angles`, tol);
     }
-    const hit = hitGenerator(bundle, host, phiRad);
+    const hit = hitGenerator(bundle, host, phiRad, hitOptions);
     if (hit === undefined) throw missError(phiRad, n);
     const flat = flatten(hit);
     if (!(Math.abs(hit.axialMm) <= MAX_CUT_REACH_MM && Number.isFinite(flat[0]) && Number.isFinite(flat[1]))) {
