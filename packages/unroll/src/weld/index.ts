@@ -1,0 +1,4 @@
+export * from './types.js';
+export * from './weld-prep-stations.js';
+export * from './weld-prep-branch.js';
+export * from './weld-prep-cuts.js';
