@@ -19,7 +19,7 @@ import {
 import type { Point2, Polyline2 } from '../types.js';
 import { sampleCut } from '../wrap/sample-cut.js';
 import type { BranchWeldPrep, HoleStationPrep, WeldPrepOptions } from './types.js';
-import { prepStations, resolveWeldPrepStations, stationPhiRad } from './weld-prep-stations.js';
+import { prepStations, resolveWeldPrepStations, stationPhiRad } from './internal/weld-prep-stations.js';
 
 /**
  * Weld preparation of a branch joint (conventions in `weld/types.ts` and

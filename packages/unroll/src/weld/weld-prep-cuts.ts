@@ -2,9 +2,7 @@
  * Weld preparation of a cut-back (a pipe end cut to meet a plane) and of a
  * miter elbow.
  */
-import {
-  GirthError,
-} from '@girth/pipes';
+import { GirthError } from '@girth/pipes';
 import {
   miterGeometry,
   planeCutGeometry,
@@ -16,7 +14,7 @@ import {
   type PlaneCutSpec,
 } from '@girth/geometry';
 import type { MiterWeldPrep, PlaneCutWeldPrep, WeldPrepOptions } from './types.js';
-import { prepStations, resolveWeldPrepStations } from './weld-prep-stations.js';
+import { prepStations, resolveWeldPrepStations } from './internal/weld-prep-stations.js';
 
 /**
  * Weld preparation of a pipe end cut to meet a plane: at each station the

@@ -3,8 +3,8 @@
  */
 import { GirthError, requireInteger } from '@girth/pipes';
 import { bevelAtStation, weldStationFrame, type GeneratorBundle, type HostSurface, type ResolvedGroove } from '@girth/geometry';
-import { CUT_LAYOUT_STATIONS } from '../plane-cut/layout-options.js';
-import type { StationWeldPrep, WeldPrepOptions } from './types.js';
+import { CUT_LAYOUT_STATIONS } from '../../plane-cut/layout-options.js';
+import type { StationWeldPrep, WeldPrepOptions } from '../types.js';
 
 /**
  * The options checked: the station count (4 to 360, default 16).
@@ -18,7 +18,10 @@ export function resolveWeldPrepStations(options: WeldPrepOptions): number {
   return requireInteger(options.stations ?? CUT_LAYOUT_STATIONS.default, 'stations', CUT_LAYOUT_STATIONS.min, CUT_LAYOUT_STATIONS.max);
 }
 
-/** Station angle of station index i (0-based) of n, radians. */
+/**
+ * Station angle of station index i (0-based) of n, radians (station n at 360 (n − 1) / N degrees, DESIGN.md).
+ * @example stationPhiRad(4, 16) // π/2
+ */
 export const stationPhiRad = (i: number, n: number): number => (2 * Math.PI * i) / n;
 
 /**
