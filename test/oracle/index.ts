@@ -5,3 +5,4 @@ export * from './branch-oracle.js';
 export * from './girth-extreme.js';
 export * from './plane-cut-oracle.js';
 export * from './miter-oracle.js';
+export * from './dihedral-oracle.js';

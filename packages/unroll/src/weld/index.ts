@@ -1,0 +1,3 @@
+export * from './types.js';
+export * from './weld-prep-branch.js';
+export * from './weld-prep-cuts.js';
