@@ -6,3 +6,4 @@ export * from './cone/index.js';
 export * from './branch/index.js';
 export * from './plane-cut/index.js';
 export * from './miter/index.js';
+export * from './fit-up/index.js';
