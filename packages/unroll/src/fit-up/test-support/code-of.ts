@@ -1,0 +1,12 @@
+/** `code:field` of the GirthError `f` throws, or undefined when it throws none (other errors pass through). */
+import { isGirthError } from '@girth/pipes';
+
+export function codeOf(f: () => unknown): string | undefined {
+  try {
+    f();
+  } catch (e) {
+    if (isGirthError(e)) return `${e.code}:${e.field}`;
+    throw e;
+  }
+  return undefined;
+}
