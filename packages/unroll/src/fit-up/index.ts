@@ -6,3 +6,4 @@ export * from './angle-check.js';
 export * from './branch-fit-up.js';
 export * from './miter-fit-up.js';
 export * from './plane-cut-fit-up.js';
+export * from './fit-up-text.js';
