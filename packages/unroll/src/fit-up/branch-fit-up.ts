@@ -102,6 +102,6 @@ function fitUpOfGeometry(g: BranchGeometry, check: AngleCheck): BranchFitUp {
     weld: marks(weldBundle),
     ...(e === 0 ? {} : { offset: { offsetMm: e, girthFromTopLineMm: centre.girthMm, chordFromTopLineMm: Math.sign(e) * Math.hypot(e, R - zc) } }),
     angleCheck: check,
-    cutDepths: [measureCutDepth(g.cutBundle, g.cutHost, { templateId: 'branch-cut' })],
+    cutDepths: [measureCutDepth(g.cutBundle, g.cutHost, { templateId: 'branch-cut', kinkPhisRad: g.cutKinkPhisRad })],
   };
 }

@@ -11,6 +11,14 @@ const TWO_PI = 2 * Math.PI;
 /** Generators tried round the pipe before the extremes are refined (one each half degree). */
 const SCAN_STEPS = 720;
 
+/**
+ * Around a kink (a generator grazing the host) the intersection counts near
+ * grazes as touching, which can put a spurious extreme within about 1e-6 rad
+ * of it; an extreme found this close to a kink is the kink itself (the cut is
+ * V-shaped there), radians.
+ */
+const KINK_BAND_RAD = 1e-5;
+
 /** Width to which a long or short point is located, radians (~1e-10 mm of girth on a 100 mm pipe). */
 const EXTREME_PHI_TOL_RAD = 1e-12;
 
@@ -45,12 +53,15 @@ export interface CutDepthPlacement {
   readonly longLineYMm?: number;
   /** Default +1. */
   readonly cutbackDirection?: 1 | -1;
+  /** Station angles where the cut has a kink (a grazing generator), radians; see `BranchGeometry.cutKinkPhisRad`. */
+  readonly kinkPhisRad?: readonly number[];
 }
 
 /**
  * Locates the long point (largest axial position) and the short point
  * (smallest) of the cut of `bundle` against `host`: a scan every half degree,
- * then a golden-section search around each local extreme of the scan. The
+ * then a golden-section search around each local extreme of the scan (an
+ * extreme next to a kink given in `placement.kinkPhisRad` is the kink). The
  * full depth is their difference, so it is exact wherever the short point
  * falls, between stations or on one.
  *
@@ -60,7 +71,7 @@ export interface CutDepthPlacement {
  * measureCutDepth(geometry.cutBundle, geometry.cutHost, { templateId: 'branch-cut' }).fullDepthMm
  */
 export function measureCutDepth(bundle: GeneratorBundle, host: HostSurface, placement: CutDepthPlacement): CutDepth {
-  const { long, short } = locateCutExtremes(bundle, host);
+  const { long, short } = locateCutExtremes(bundle, host, placement.kinkPhisRad);
   return {
     kind: 'cut-depth',
     templateId: placement.templateId,
@@ -77,15 +88,26 @@ export function measureCutDepth(bundle: GeneratorBundle, host: HostSurface, plac
  * The long point (largest axial position, mm along the bundle's axis toward
  * the host) and the short point (smallest) of a cut, with their station
  * angles in radians. See {@link measureCutDepth}.
+ * @param kinkPhisRad station angles of the cut's kinks, radians (default none).
  * @throws GirthError `NO_INTERSECTION` (field `stations`) when no generator meets the host.
  */
 export function locateCutExtremes(
   bundle: GeneratorBundle,
   host: HostSurface,
+  kinkPhisRad: readonly number[] = [],
 ): { readonly long: { readonly phi: number; readonly value: number }; readonly short: { readonly phi: number; readonly value: number } } {
   const axial = (phi: number): number | undefined => hitGenerator(bundle, host, phi)?.axialMm;
-  const long = extreme(axial, 1);
-  const short = extreme(axial, -1);
+  const atKink = (found: { phi: number; value: number } | undefined): { phi: number; value: number } | undefined => {
+    if (found === undefined) return undefined;
+    for (const kink of kinkPhisRad) {
+      const apart = Math.abs(((found.phi - kink) % TWO_PI + 3 * Math.PI) % TWO_PI - Math.PI);
+      const value = apart <= KINK_BAND_RAD ? axial(kink) : undefined;
+      if (value !== undefined) return { phi: kink, value };
+    }
+    return found;
+  };
+  const long = atKink(extreme(axial, 1));
+  const short = atKink(extreme(axial, -1));
   if (long === undefined || short === undefined) {
     throw new GirthError('NO_INTERSECTION', 'stations', 'stations: the pipe wall misses the surface it is cut to meet; check the sizes and the offset');
   }

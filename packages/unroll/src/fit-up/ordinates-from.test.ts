@@ -81,6 +81,18 @@ describe('ordinatesFrom', () => {
     );
   });
 
+  it('finds the full depth at a kink: a branch side flush with the header side, tee and 60° lateral', () => {
+    // Closed form (branch-fixtures) with |e| + r = R: the generator at 90° grazes the header side (a kink of the cut).
+    const R = NPS12.odMm / 2;
+    const r = (NPS6.odMm - 2 * NPS6.wallMm) / 2;
+    for (const angleDeg of [90, 60]) {
+      const spec = { header: NPS12, branch: NPS6, angleDeg, offsetMm: R - r };
+      const t = (phi: number): number => branchAxialClosedForm(R, r, angleDeg, R - r, phi);
+      const depth = maxAround(t) + maxAround((phi) => -t(phi));
+      expectReferencesAddUp(layoutBranch(spec, { stations: 12 }).templates[0], branchFitUp(spec).cutDepths, { cutback: depth }, 1e-7 * R);
+    }
+  });
+
   it('plane cuts: the two references add up to D tan(c), c = 90° − angle', () => {
     // REFERENCES.md, "Geometry with published statements": the ordinate of a plane cut is (D/2) tan(cut)(1 − cos phi), so its full depth is D tan(cut).
     fc.assert(
