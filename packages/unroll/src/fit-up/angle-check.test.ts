@@ -55,5 +55,7 @@ describe('angleCheck', () => {
     expect(codeOf(() => angleCheck(180))).toBe('BAD_ANGLE:angleDeg');
     expect(codeOf(() => angleCheck(45, null as never))).toBe('BAD_OPTION:options');
     expect(codeOf(() => angleCheck(45, { runMm: 1e-3 }))).toBeUndefined();
+    expect(codeOf(() => angleCheck(89.999999, { runMm: 1e6 }))).toBeUndefined();
+    expect(codeOf(() => angleCheck(45, { runMm: 1e308 }))).toBe('OUT_OF_RANGE:runMm');
   });
 });

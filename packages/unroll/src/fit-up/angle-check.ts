@@ -6,6 +6,9 @@ import { GirthError, requireFinite, requirePositive } from '@girth/pipes';
 /** Default run along the header (and radius of the chord check): one foot, mm. Callers in mm jobs pass a round number of their own. */
 export const DEFAULT_CHECK_LENGTH_MM = 304.8;
 
+/** Longest run, chord radius or unit an angle check accepts, mm (1 km): beyond it the input is a slip, and the rise could overflow. */
+export const MAX_CHECK_LENGTH_MM = 1e6;
+
 /** Radius, in units, on which one unit of arc spans one degree: 180/π ≈ 57.3 (common practice). */
 export const ARC_RADIUS_UNITS_PER_DEGREE = 180 / Math.PI;
 
@@ -56,7 +59,8 @@ export interface AngleCheck {
  *
  * @param angleDeg the angle, degrees, in (0, 180) (between branch and header: (0, 90]).
  * @throws GirthError `BAD_ANGLE` (field `angleDeg`) outside (0, 180);
- *   `NEGATIVE` (field `runMm`, `chordRadiusMm` or `arcUnitMm`) for a length of zero or below;
+ *   `NEGATIVE` (field `runMm`, `chordRadiusMm` or `arcUnitMm`) for a length of zero or below,
+ *   `OUT_OF_RANGE` for one over {@link MAX_CHECK_LENGTH_MM};
  *   `NOT_A_NUMBER` / `NOT_FINITE` naming the option.
  * @example angleCheck(45, { runMm: 300 }).riseMm // 300 (tan 45° = 1)
  */
@@ -68,9 +72,9 @@ export function angleCheck(angleDeg: number, options: AngleCheckOptions = {}): A
   if (!(a > 0 && a < 180)) {
     throw new GirthError('BAD_ANGLE', 'angleDeg', `angleDeg: an angle to check must be between 0° and 180°, got ${a}°`, angleDeg);
   }
-  const runMm = options.runMm === undefined ? DEFAULT_CHECK_LENGTH_MM : requirePositive(options.runMm, 'runMm');
-  const chordRadiusMm = options.chordRadiusMm === undefined ? DEFAULT_CHECK_LENGTH_MM : requirePositive(options.chordRadiusMm, 'chordRadiusMm');
-  const arcUnitMm = options.arcUnitMm === undefined ? 25.4 : requirePositive(options.arcUnitMm, 'arcUnitMm');
+  const runMm = checkLength(options.runMm, 'runMm', DEFAULT_CHECK_LENGTH_MM);
+  const chordRadiusMm = checkLength(options.chordRadiusMm, 'chordRadiusMm', DEFAULT_CHECK_LENGTH_MM);
+  const arcUnitMm = checkLength(options.arcUnitMm, 'arcUnitMm', 25.4);
   const rad = (a * Math.PI) / 180;
   return {
     kind: 'angle-check',
@@ -83,4 +87,13 @@ export function angleCheck(angleDeg: number, options: AngleCheckOptions = {}): A
     arcRadiusMm: ARC_RADIUS_UNITS_PER_DEGREE * arcUnitMm,
     arcLengthMm: ARC_RADIUS_UNITS_PER_DEGREE * arcUnitMm * rad,
   };
+}
+
+function checkLength(value: unknown, field: string, fallback: number): number {
+  if (value === undefined) return fallback;
+  const v = requirePositive(value, field);
+  if (v > MAX_CHECK_LENGTH_MM) {
+    throw new GirthError('OUT_OF_RANGE', field, `${field}: must be at most ${MAX_CHECK_LENGTH_MM} mm (1 km), got ${v} mm`, value);
+  }
+  return v;
 }

@@ -89,6 +89,7 @@ export function measureCutDepth(bundle: GeneratorBundle, host: HostSurface, plac
  * the host) and the short point (smallest) of a cut, with their station
  * angles in radians. See {@link measureCutDepth}.
  * @param kinkPhisRad station angles of the cut's kinks, radians (default none).
+ * @example locateCutExtremes(geometry.cutBundle, geometry.cutHost).short.phi // the short point's station angle, radians
  * @throws GirthError `NO_INTERSECTION` (field `stations`) when no generator meets the host.
  */
 export function locateCutExtremes(
