@@ -9,3 +9,4 @@ export * from './branch/index.js';
 export * from './plane-cut/index.js';
 export * from './miter/index.js';
 export * from './weld/index.js';
+export * from './fit-up/index.js';

@@ -1,0 +1,21 @@
+/**
+ * The one place the fit-up code reads and writes the values of a station row.
+ * Rows keep their lengths in `lengthsMm` today; when rows move to a `values`
+ * record, only this file changes.
+ */
+import type { StationRow } from '../../types.js';
+
+/** The row's value in column `key` (mm for length columns), or undefined where the row leaves it out. */
+export function stationValue(row: StationRow, key: string): number | undefined {
+  return row.lengthsMm[key];
+}
+
+/** All values of a row, keyed by column. */
+export function stationValues(row: StationRow): Readonly<Record<string, number>> {
+  return row.lengthsMm;
+}
+
+/** The same row with its values replaced. */
+export function withStationValues(row: StationRow, values: Readonly<Record<string, number>>): StationRow {
+  return { ...row, lengthsMm: values };
+}
