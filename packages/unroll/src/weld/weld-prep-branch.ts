@@ -3,7 +3,7 @@
  * station, and the torch for the header hole with the hole's line on the ID.
  */
 import {
-  grazingPhisRad,
+  findGrazingPhis,
   headerIdSurface,
   hitGenerator,
   holeTorchAtStation,
@@ -92,7 +92,7 @@ function holeOnHeaderId(
     stations: count,
     wrapOdMm: 2 * host.radius,
     chordToleranceMm,
-    kinkPhisRad: grazingPhisRad(e, r, host.radius),
+    kinkPhisRad: findGrazingPhis(g.holeBundle, host),
     flatten,
     longPoints: false,
   });
