@@ -184,7 +184,7 @@ describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
       'NOT_FINITE',
       'template.stationLines[0].to[1]',
     );
-    throwsGirth(() => templateToDxf({ ...hole, squareLine: { kind: 'segment', from: [0, 0], to: [Number.NaN, 0] } }, opts()), 'NOT_A_NUMBER', 'template.squareLine.to[0]');
+    throwsGirth(() => templateToDxf({ ...planeCutWrap(NPS6_OD_MM, 45), squareLine: { kind: 'segment', from: [0, 0], to: [Number.NaN, 0] } }, opts()), 'NOT_A_NUMBER', 'template.squareLine.to[0]');
     throwsGirth(() => templateToDxf({ ...hole, cut: [] }, opts()), 'EMPTY_INPUT', 'template.cut');
     throwsGirth(
       () => templateToDxf({ ...hole, marks: [{ kind: 'arc', center: [0, 0], radiusMm: -5, startDeg: 0, endDeg: 90 }] }, opts()),

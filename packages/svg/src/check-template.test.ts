@@ -55,7 +55,7 @@ describe('checkTemplate', () => {
   test('a template with nothing to cut, or a wrap without its stretch-out, is refused', () => {
     expect(girthErrorOf(() => checkTemplate({ ...wrap, cut: [] })).code).toBe('EMPTY_INPUT');
     const { stretchOutMm: _s, ...noStretch } = wrap;
-    const e = girthErrorOf(() => checkTemplate(noStretch));
+    const e = girthErrorOf(() => checkTemplate(noStretch as Template));
     expect(e.code).toBe('EMPTY_INPUT');
     expect(e.field).toBe('template.stretchOutMm');
   });

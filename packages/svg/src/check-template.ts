@@ -87,7 +87,7 @@ export function checkTemplate(template: Template): void {
   }
   template.cut.forEach((p, i) => checkPart(p, `${t}.cut[${i}]`));
   template.marks.forEach((p, i) => checkPart(p, `${t}.marks[${i}]`));
-  if (template.squareLine) checkPart(template.squareLine, `${t}.squareLine`);
+  if (template.kind === 'wrap' && template.squareLine) checkPart(template.squareLine, `${t}.squareLine`);
   template.stationLines.forEach((s, i) => {
     checkPoint(s.from, `${t}.stationLines[${i}].from`);
     checkPoint(s.to, `${t}.stationLines[${i}].to`);

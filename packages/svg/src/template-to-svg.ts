@@ -25,7 +25,7 @@ function geometryBox(template: Template): Box {
   let box = EMPTY_BOX;
   for (const part of template.cut) box = unionBox(box, partBox(part));
   for (const part of template.marks) box = unionBox(box, partBox(part));
-  if (template.squareLine) box = unionBox(box, partBox(template.squareLine));
+  if (template.kind === 'wrap' && template.squareLine) box = unionBox(box, partBox(template.squareLine));
   for (const s of template.stationLines) box = unionBox(box, pointsBox([s.from, s.to]));
   return box;
 }
@@ -67,7 +67,7 @@ export function templateToSvg(template: Template, options?: SvgOptions): string 
   const numbers = planStationNumbers(template.stationLines);
   const labels = planLabels(template.labels);
   const overlap =
-    template.kind === 'wrap' && opts.overlapMm > 0 && template.stretchOutMm !== undefined
+    template.kind === 'wrap' && opts.overlapMm > 0
       ? planOverlap(geometry, template.stretchOutMm, opts.overlapMm)
       : undefined;
   let drawing = growBox(geometry, MAX_STROKE_MM / 2);

@@ -36,7 +36,7 @@ function text(layerText: string, at: readonly [number, number], height: number, 
 /** Square line, station lines (and their numbers) and other marks, in mm. */
 function markEntities(template: Template, o: ResolvedDxfOptions): SheetEntity[] {
   const out: SheetEntity[] = [];
-  if (template.squareLine !== undefined) {
+  if (template.kind === 'wrap' && template.squareLine !== undefined) {
     const from = checkPointMm(template.squareLine.from, 'template.squareLine.from');
     const to = checkPointMm(template.squareLine.to, 'template.squareLine.to');
     out.push({ kind: 'line', layer: 'mark', from, to });

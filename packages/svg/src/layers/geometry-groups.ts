@@ -38,7 +38,7 @@ export function cutGroup(template: Template, frame: Frame, w: NumberWriter): INo
 
 /** The square line, when the template has one. */
 export function squareLineGroup(template: Template, frame: Frame, w: NumberWriter): INode {
-  const line = template.squareLine;
+  const line = template.kind === 'wrap' ? template.squareLine : undefined;
   return el(
     'g',
     { id: 'square-line', class: 'square-line', ...strokeAttrs(w, INK.black, STROKE_MM.squareLine) },
