@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { girthErrorOf } from '@girth/pipes/test-support';
 import type { PathPart, Point2, Template } from '@girth/unroll';
-import { arcSweepDeg, checkTemplate } from './check-template.js';
+import { arcSweepDeg, checkTemplate } from '@girth/sheet';
 import { templateToSvg } from './template-to-svg.js';
 import { coneSector, planeCutWrap, teeHole } from './test-support/fixtures.js';
 

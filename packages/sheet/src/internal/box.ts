@@ -1,17 +1,13 @@
 /**
  * Axis-aligned boxes in mm, and the boxes of the parts of a template (y-up).
+ * Arc extents are computed here, once, for every writer.
  */
-import makerjs from 'makerjs';
 import type { PathPart, Point2 } from '@girth/unroll';
 import { arcSweepDeg } from '../check-template.js';
 
-/** An axis-aligned box, mm. Empty when `minX > maxX`. */
-export interface Box {
-  readonly minX: number;
-  readonly minY: number;
-  readonly maxX: number;
-  readonly maxY: number;
-}
+import type { Box } from '../types.js';
+
+export type { Box };
 
 /** The empty box: the identity of {@link unionBox}. */
 export const EMPTY_BOX: Box = { minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity };
@@ -56,7 +52,36 @@ export function pointsBox(points: readonly Point2[]): Box {
 }
 
 /**
- * The box of a path part, mm; an arc's box includes the quadrant points it passes (measured by makerjs).
+ * The box of a circular arc, mm: its two ends and every quadrant point (0°, 90°,
+ * 180°, 270°) it passes, counter-clockwise from `startDeg` to `endDeg`. A sweep of
+ * 360° or more is the whole circle.
+ *
+ * @example arcBox([0, 0], 10, 0, 180) // { minX: -10, minY: 0, maxX: 10, maxY: 10 }
+ */
+export function arcBox(center: Point2, radiusMm: number, startDeg: number, endDeg: number): Box {
+  const sweep = arcSweepDeg(startDeg, endDeg);
+  const [cx, cy] = center;
+  if (sweep === 360) return { minX: cx - radiusMm, minY: cy - radiusMm, maxX: cx + radiusMm, maxY: cy + radiusMm };
+  const at = (deg: number): Point2 => {
+    const a = (deg * Math.PI) / 180;
+    return [cx + radiusMm * Math.cos(a), cy + radiusMm * Math.sin(a)];
+  };
+  const points: Point2[] = [at(startDeg), at(startDeg + sweep)];
+  const start = ((startDeg % 360) + 360) % 360;
+  // Quadrant angles q with 0 < (q - start) mod 360 < sweep lie inside the arc.
+  for (let k = 0; k < 4; k++) {
+    const q = 90 * k;
+    const offset = (((q - start) % 360) + 360) % 360;
+    if (offset > 0 && offset < sweep) {
+      // Exactly on the axis, whatever cos/sin round to.
+      points.push(k === 0 ? [cx + radiusMm, cy] : k === 1 ? [cx, cy + radiusMm] : k === 2 ? [cx - radiusMm, cy] : [cx, cy - radiusMm]);
+    }
+  }
+  return pointsBox(points);
+}
+
+/**
+ * The box of a path part, mm; an arc's box includes the quadrant points it passes.
  *
  * @example partBox({ kind: 'arc', center: [0, 0], radiusMm: 10, startDeg: 0, endDeg: 180 }) // { minX: -10, minY: 0, maxX: 10, maxY: 10 }
  */
@@ -66,18 +91,7 @@ export function partBox(part: PathPart): Box {
       return pointsBox(part.points);
     case 'segment':
       return pointsBox([part.from, part.to]);
-    case 'arc': {
-      const full = arcSweepDeg(part.startDeg, part.endDeg) === 360;
-      const path = new makerjs.paths.Arc(
-        [part.center[0], part.center[1]],
-        part.radiusMm,
-        full ? 0 : part.startDeg,
-        full ? 360 : part.endDeg,
-      );
-      const m = makerjs.measure.pathExtents(path);
-      const [minX, minY] = m.low as [number, number];
-      const [maxX, maxY] = m.high as [number, number];
-      return { minX, minY, maxX, maxY };
-    }
+    case 'arc':
+      return arcBox(part.center, part.radiusMm, part.startDeg, part.endDeg);
   }
 }
