@@ -36,6 +36,7 @@ function benchTemplate() {
     wrapOdMm: od,
     cut: [{ kind: 'polyline', points, closed: false }],
     squareLine: { kind: 'segment', from: [0, 0], to: [Math.PI * od, 0] },
+    startLine: 'heel',
     stationLines,
     marks: [],
     labels: [{ text: 'HEEL', at: [0, -8], heightMm: 4 }],

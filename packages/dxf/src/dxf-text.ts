@@ -23,7 +23,7 @@ const TRANSLITERATIONS: Readonly<Record<string, string>> = {
   '\u2010': '-', '\u2011': '-', '\u2012': '-', '\u2013': '-', '\u2014': '-', '\u2212': '-',
   '\u2018': "'", '\u2019': "'", '\u201A': "'", '\u2032': "'",
   '\u201C': '"', '\u201D': '"', '\u201E': '"', '\u2033': '"',
-  '\u2026': '...', '\u2022': '*', '\u00B5': 'u', '\u03BC': 'u', '\u2122': 'TM',
+  '\u2026': '...', '\u2022': '*', '\u00B7': '-', '\u00B5': 'u', '\u03BC': 'u', '\u2122': 'TM',
 };
 
 type Token = { readonly kind: 'char'; readonly text: string } | { readonly kind: 'code'; readonly text: string };

@@ -15,7 +15,7 @@ export const MAX_OVERLAP_MM = 200;
 /** Longest accepted job or piece label, characters. */
 export const MAX_LABEL_CHARS = 200;
 /** Smallest and largest title block text scale. */
-export const TEXT_SCALE_RANGE = { min: 0.1, max: 20 } as const;
+export const TEXT_SCALE_RANGE = { min: 0.01, max: 50 } as const;
 
 const SHEET_UNITS: readonly SheetUnits[] = ['mm', 'in'];
 
@@ -43,7 +43,7 @@ function optionalLabel(value: unknown, field: 'job' | 'piece'): string | undefin
  * @returns every option, checked: `sheetUnits` 'mm' | 'in' (default 'mm'),
  *   `marginMm` in [0, 100] (default 10), `overlapMm` in [0, 200] (default 25),
  *   `job` and `piece` text of at most 200 characters or `undefined`, `textScale`
- *   in [0.1, 20] (default 1), `stationNumbers` true or false (default true).
+ *   in [0.01, 50] (default 1), `stationNumbers` true or false (default true).
  * @throws GirthError `UNKNOWN_UNIT` (field `sheetUnits`) for units other than 'mm' or 'in';
  *   `NOT_A_NUMBER`, `NOT_FINITE` or `OUT_OF_RANGE` (field `marginMm` / `overlapMm` / `textScale`)
  *   for a number that is not one or lies outside its range; `BAD_OPTION` (field `job` / `piece` /

@@ -129,7 +129,7 @@ function titleItems(template: Template, opts: ResolvedSheetOptions, drawing: Box
  * @param template - the template (mm, y-up) from `@girth/unroll`.
  * @param options - sheet units ('mm' | 'in'), margin (mm, 0–100, default 10), glue tab
  *   (mm, 0–200, default 25; wraps only), job and piece (text, ≤ 200 characters), title
- *   text scale (0.1–20, default 1), station numbers on or off (default on).
+ *   text scale (0.01–50, default 1), station numbers on or off (default on).
  * @returns the plan: plain readonly data.
  * @throws GirthError for bad options (see `resolveSheetOptions`) and for a template that
  *   cannot be drawn (see `checkTemplate`: e.g. `NOT_A_NUMBER` on `template.cut[0].points[14][1]`).

@@ -137,7 +137,7 @@ export interface SheetOptions {
   readonly job?: string;
   /** The piece or spool, as the user wrote it. At most 200 characters. */
   readonly piece?: string;
-  /** Title block text size as a multiple of the standard size, 0.1 to 20. Default 1. */
+  /** Title block text size as a multiple of the standard size, 0.01 to 50. Default 1. */
   readonly textScale?: number;
   /** Number the station lines; default true. */
   readonly stationNumbers?: boolean;

@@ -8,6 +8,7 @@ import type { ResolvedSheetOptions } from '../types.js';
 import { FONT_MM } from '../style.js';
 import { textLines } from '../internal/text-lines.js';
 import { PRINT_NOTE } from '../print-note.js';
+import { wrapWords } from '../internal/wrap-words.js';
 
 /** One line of the title block. */
 export interface TitleLine {
@@ -17,6 +18,9 @@ export interface TitleLine {
   /** Stable role of the line: `job`, `title`, `note`, `placement` or `print`. */
   readonly role: 'job' | 'title' | 'note' | 'placement' | 'print';
 }
+
+/** Title block lines longer than this many characters are broken at spaces into several lines. */
+export const TITLE_LINE_CHARS = 110;
 
 /** Blank left for writing by hand when no job or piece was given. */
 const BLANK = '________________';
@@ -74,5 +78,10 @@ export function planTitleLines(template: Template, options: ResolvedSheetOptions
     bold: false,
     role: 'print',
   });
-  return lines;
+  // Long lines are broken at spaces so neither the paper nor a DXF text runs on (a blank line stays one).
+  // The print line is the sheet's own fixed text (its length bounded by the template id): kept whole.
+  return lines.flatMap((l) => {
+    const parts = l.role === 'print' ? [] : wrapWords(l.text, TITLE_LINE_CHARS);
+    return parts.length <= 1 ? [l] : parts.map((text) => ({ ...l, text }));
+  });
 }
