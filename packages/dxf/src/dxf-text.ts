@@ -66,6 +66,11 @@ function emitChar(text: string, next: Token | undefined): string {
  * @example dxfSafeText('Ø168.3 @ 45°\n0\nLINE') // '%%c168.3 @ 45%%d 0 LINE'
  */
 export function dxfSafeText(text: string): string {
+  // Plain printable ASCII with no caret or percent sign is already safe: only trimmed and cut.
+  if (/^[\x20-\x24\x26-\x5D\x5F-\x7E]*$/.test(text)) {
+    const t = text.trim();
+    return t.length <= MAX_TEXT_CHARS ? t : t.slice(0, MAX_TEXT_CHARS).trim();
+  }
   const flat = flattenControls(text).trim();
   const tokens = [...flat].flatMap(tokensOf);
   let out = '';

@@ -28,7 +28,10 @@ function box(b: Box, field: string): void {
 function part(p: PathPart, field: string): void {
   switch (p.kind) {
     case 'polyline':
-      for (let i = 0; i < p.points.length; i++) point(p.points[i] as Point2, `${field}.points[${i}]`);
+      for (let i = 0; i < p.points.length; i++) {
+        const q = p.points[i] as Point2;
+        if (!Number.isFinite(q[0]) || !Number.isFinite(q[1])) point(q, `${field}.points[${i}]`);
+      }
       return;
     case 'segment':
       point(p.from, `${field}.from`);

@@ -37,7 +37,11 @@ function checkPart(part: PathPart, field: string): void {
       if (!Array.isArray(part.points) || part.points.length < 2) {
         throw new GirthError('EMPTY_INPUT', `${field}.points`, `${field}.points: a polyline needs at least 2 points`, part.points);
       }
-      part.points.forEach((p, i) => checkPoint(p, `${field}.points[${i}]`));
+      part.points.forEach((p, i) => {
+        // The usual case is checked without making the field path (made only for an error).
+        if (Array.isArray(p) && p.length === 2 && Math.abs(p[0]) <= MAX_COORD_MM && Math.abs(p[1]) <= MAX_COORD_MM) return;
+        checkPoint(p, `${field}.points[${i}]`);
+      });
       return;
     }
     case 'segment':

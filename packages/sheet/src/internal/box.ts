@@ -42,7 +42,10 @@ export function pointsBox(points: readonly Point2[]): Box {
   let minY = Infinity;
   let maxX = -Infinity;
   let maxY = -Infinity;
-  for (const [x, y] of points) {
+  for (let i = 0; i < points.length; i++) {
+    const p = points[i] as Point2;
+    const x = p[0];
+    const y = p[1];
     if (x < minX) minX = x;
     if (x > maxX) maxX = x;
     if (y < minY) minY = y;

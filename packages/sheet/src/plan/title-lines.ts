@@ -81,7 +81,7 @@ export function planTitleLines(template: Template, options: ResolvedSheetOptions
   // Long lines are broken at spaces so neither the paper nor a DXF text runs on (a blank line stays one).
   // The print line is the sheet's own fixed text (its length bounded by the template id): kept whole.
   return lines.flatMap((l) => {
-    const parts = l.role === 'print' ? [] : wrapWords(l.text, TITLE_LINE_CHARS);
+    const parts = l.role === 'print' || l.text.length <= TITLE_LINE_CHARS ? [] : wrapWords(l.text, TITLE_LINE_CHARS);
     return parts.length <= 1 ? [l] : parts.map((text) => ({ ...l, text }));
   });
 }
