@@ -121,6 +121,7 @@ describe('layoutMiter against the oracle (fast-check sweep)', () => {
         expect(result.templates.map((t) => t.id)).toEqual(expectedIds(c.spec.welds));
         for (const t of result.templates) {
           expect(t.kind).toBe('wrap');
+          if (t.kind !== 'wrap') continue;
           expectClose(t.stretchOutMm ?? Number.NaN, Math.PI * c.spec.pipe.odMm, tol, `${t.id} stretch-out ${describeCase(c)}`);
           expectClose(t.wrapOdMm ?? Number.NaN, c.spec.pipe.odMm, tol, `${t.id} wrap OD ${describeCase(c)}`);
           expect(t.stations.map((s) => s.n)).toEqual(Array.from({ length: c.stations }, (_, i) => i + 1));

@@ -23,7 +23,7 @@ export function templateById(result: Pick<LayoutResult, 'templates'>, id: string
  */
 export function stationColumn(template: Template, key: string): readonly number[] {
   return template.stations.map((row) => {
-    const v = row.lengthsMm[key];
+    const v = row.values[key];
     if (typeof v !== 'number' || !Number.isFinite(v)) throw new Error(`${template.id} station ${row.n}: '${key}' is ${String(v)}`);
     return v;
   });

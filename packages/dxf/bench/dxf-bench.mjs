@@ -25,7 +25,7 @@ function benchTemplate() {
   for (let n = 1; n <= 16; n++) {
     const phi = (2 * Math.PI * (n - 1)) / 16;
     stationLines.push({ n, angleDeg: (n - 1) * 22.5, from: [r * phi, 0], to: [r * phi, y(phi)] });
-    stations.push({ n, angleDeg: (n - 1) * 22.5, lengthsMm: { girth: r * phi, cutback: y(phi) } });
+    stations.push({ n, angleDeg: (n - 1) * 22.5, values: { girth: r * phi, cutback: y(phi) } });
   }
   return {
     id: 'plane-cut',
@@ -36,6 +36,7 @@ function benchTemplate() {
     wrapOdMm: od,
     cut: [{ kind: 'polyline', points, closed: false }],
     squareLine: { kind: 'segment', from: [0, 0], to: [Math.PI * od, 0] },
+    startLine: 'heel',
     stationLines,
     marks: [],
     labels: [{ text: 'HEEL', at: [0, -8], heightMm: 4 }],

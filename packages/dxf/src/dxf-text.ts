@@ -23,7 +23,7 @@ const TRANSLITERATIONS: Readonly<Record<string, string>> = {
   '\u2010': '-', '\u2011': '-', '\u2012': '-', '\u2013': '-', '\u2014': '-', '\u2212': '-',
   '\u2018': "'", '\u2019': "'", '\u201A': "'", '\u2032': "'",
   '\u201C': '"', '\u201D': '"', '\u201E': '"', '\u2033': '"',
-  '\u2026': '...', '\u2022': '*', '\u00B5': 'u', '\u03BC': 'u', '\u2122': 'TM',
+  '\u2026': '...', '\u2022': '*', '\u00B7': '-', '\u00B5': 'u', '\u03BC': 'u', '\u2122': 'TM',
 };
 
 type Token = { readonly kind: 'char'; readonly text: string } | { readonly kind: 'code'; readonly text: string };
@@ -66,6 +66,11 @@ function emitChar(text: string, next: Token | undefined): string {
  * @example dxfSafeText('Ø168.3 @ 45°\n0\nLINE') // '%%c168.3 @ 45%%d 0 LINE'
  */
 export function dxfSafeText(text: string): string {
+  // Plain printable ASCII with no caret or percent sign is already safe: only trimmed and cut.
+  if (/^[\x20-\x24\x26-\x5D\x5F-\x7E]*$/.test(text)) {
+    const t = text.trim();
+    return t.length <= MAX_TEXT_CHARS ? t : t.slice(0, MAX_TEXT_CHARS).trim();
+  }
   const flat = flattenControls(text).trim();
   const tokens = [...flat].flatMap(tokensOf);
   let out = '';

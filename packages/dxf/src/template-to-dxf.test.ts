@@ -133,7 +133,7 @@ describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
     expect(texts).toContain('HEEL');
     expect(texts).toContain('16');
     expect(texts).toContain('Plane cut 22.5%%d on %%c168.275 mm');
-    expect(texts).toContain('Job: J-4471   Piece: SP-09');
+    expect(texts).toContain('Job: J-4471 - Piece: SP-09');
     expect(texts.filter((t) => t.includes('CAUTION'))).toEqual([CAUTION]); // once, whole, on one line
     expect(dxf.entities.filter((e) => e.type === 'TEXT').every((e) => e.layer === 'TEXT')).toBe(true);
   });
@@ -150,7 +150,7 @@ describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
     expect(noteLines.every((l) => l.length <= 110)).toBe(true);
   });
 
-  it('keeps a hostile label ONE text entity', () => {
+  it('keeps every line of a hostile label one text entity, and adds no other entity', () => {
     const base = teeHole(NPS12_OD_MM, NPS6_STD_ID_MM, 72);
     const hostile: Template = {
       ...base,
@@ -161,9 +161,11 @@ describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
     const text = templateToDxf(hostile, opts({ job: 'x\n0\nEOF', piece: '\u0000\u0085' }));
     const dxf = parseDxf(text);
     const counts = countByLayer(dxf);
-    expect(counts).toEqual({ ...plain, 'TEXT:TEXT': plain['TEXT:TEXT']! + 2 }); // the new label and the job line
+    // The label's five lines, each one TEXT where the SVG puts its line (the job line is there either way).
+    expect(counts).toEqual({ ...plain, 'TEXT:TEXT': plain['TEXT:TEXT']! + 5 });
     const texts = dxf.entities.filter((e) => e.type === 'TEXT').map((e) => (e as unknown as { text: string }).text);
-    expect(texts).toContain('A 0 LINE 8 0');
+    expect(texts).toEqual(expect.arrayContaining(['A', '0', 'LINE', '8']));
+    expect(texts).toContain('Job: x 0 EOF - Piece:');
     expect(texts).toContain('T 0 CIRCLE 8 CUT 10 0 20 0 40 99');
     expect(/[^\x20-\x7E\r\n]/.test(text)).toBe(false);
   });
@@ -184,7 +186,7 @@ describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
       'NOT_FINITE',
       'template.stationLines[0].to[1]',
     );
-    throwsGirth(() => templateToDxf({ ...hole, squareLine: { kind: 'segment', from: [0, 0], to: [Number.NaN, 0] } }, opts()), 'NOT_A_NUMBER', 'template.squareLine.to[0]');
+    throwsGirth(() => templateToDxf({ ...planeCutWrap(NPS6_OD_MM, 45), squareLine: { kind: 'segment', from: [0, 0], to: [Number.NaN, 0] } }, opts()), 'NOT_A_NUMBER', 'template.squareLine.to[0]');
     throwsGirth(() => templateToDxf({ ...hole, cut: [] }, opts()), 'EMPTY_INPUT', 'template.cut');
     throwsGirth(
       () => templateToDxf({ ...hole, marks: [{ kind: 'arc', center: [0, 0], radiusMm: -5, startDeg: 0, endDeg: 90 }] }, opts()),
@@ -240,7 +242,7 @@ describe('templateToDxf, checked by ezdxf', () => {
       const polylineType = key.includes('R12') ? 'POLYLINE' : 'LWPOLYLINE';
       expect(report.counts[polylineType], key).toBe(1);
       expect(report.closedByLayer['CUT'] ?? 0, key).toBe(key.startsWith('wrap') ? 0 : 1);
-      expect(report.texts, key).toContain('Job: J-4471 %%c   Piece: SP-09 0 LINE');
+      expect(report.texts, key).toContain('Job: J-4471 %%c - Piece: SP-09 0 LINE');
       expect(report.texts.filter((t) => t.includes('CAUTION')), key).toEqual([CAUTION]);
     }
   });

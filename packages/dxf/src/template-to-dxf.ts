@@ -1,27 +1,51 @@
 /**
- * The DXF exporter's entry point: a template to the text of a DXF file.
+ * The DXF exporter's entry points: a template, or a sheet plan, to the text of a DXF file.
  */
+import { planSheet, type SheetPlan } from '@girth/sheet';
 import type { Template } from '@girth/unroll';
-import { buildSheet } from './internal/build-sheet.js';
-import { resolveDxfOptions } from './internal/options.js';
+import { planToSheet } from './internal/build-sheet.js';
+import { DEFAULT_TEXT_HEIGHT_MM, resolveDxfOptions } from './internal/options.js';
 import { writeAc1021 } from './internal/write-ac1021.js';
 import { writeR12 } from './internal/write-r12.js';
-import type { DxfOptions } from './types.js';
+import type { DxfOptions, DxfWriteOptions } from './types.js';
 
 /**
- * A template as a DXF file for a cutting table or CAD, full size.
+ * Writes a sheet plan as a DXF file, full size.
  *
- * Layers: `CUT` (lines to cut), `MARK` (square line, station lines, other
- * marks), `TEXT` (labels, station numbers, title, job and piece, a caution).
+ * Layers: `CUT` (the plan's `cut` layer), `MARK` (`mark`: square line, station
+ * lines, other marks), `TEXT` (`text`: labels, station numbers, title block,
+ * caution). The plan's `paper` items (glue tab, calibration bar) are left out.
  * Cut pieces that meet end to start become one polyline; a contour that closes
  * (a header hole, a flat pattern) is ONE closed polyline, arcs as bulges; a
- * lone arc stays a true ARC. All text is one-line printable ASCII (see
- * {@link dxfSafeText}), so no label can add entities to the file.
+ * lone arc stays a true ARC. Text sits where the plan put it: centred texts are
+ * centred on their baseline point, the rest start there; its height is the
+ * plan's cap height. All text is one-line printable ASCII (see {@link dxfSafeText}).
+ *
+ * @param plan a plan from `planSheet` of `@girth/sheet` (already checked).
+ * @param options units (`'mm'` default, or `'in'`: coordinates divided by 25.4),
+ *   version (`'AC1021'` default, or `'R12'`), join tolerance (0, 1] mm.
+ * @returns the whole DXF file as a string, ending in `EOF` and a line break.
+ * @throws GirthError `BAD_OPTION` / `OUT_OF_RANGE` for bad options.
+ * @example
+ * ```ts
+ * const dxf = planToDxf(planSheet(template, { job: 'J-2291' }), { units: 'in', version: 'R12' });
+ * ```
+ */
+export function planToDxf(plan: SheetPlan, options?: DxfWriteOptions): string {
+  const o = resolveDxfOptions(options);
+  const sheet = planToSheet(plan, { units: o.units, joinEpsMm: o.joinEpsMm });
+  return o.version === 'R12' ? writeR12(sheet) : writeAc1021(sheet);
+}
+
+/**
+ * A template as a DXF file for a cutting table or CAD, full size: its sheet
+ * planned by `planSheet` (the same plan the SVG writes), written by {@link planToDxf}.
  *
  * @param template a developed template, lengths in mm (from `@girth/unroll`).
  * @param options units (`'mm'` default, or `'in'`: coordinates divided by 25.4),
- *   version (`'AC1021'` default, or `'R12'`), job and piece text, text height
- *   (0, 100] mm, station numbers on/off, join tolerance (0, 1] mm.
+ *   version (`'AC1021'` default, or `'R12'`), job and piece text, title text cap
+ *   height (0, 100] mm (default that of the sheet, 2.92 mm; the rest of the title
+ *   block scales with it), station numbers on/off, join tolerance (0, 1] mm.
  * @returns the whole DXF file as a string, ending in `EOF` and a line break.
  *   Nothing is written anywhere; the caller saves it.
  * @throws GirthError `NOT_A_NUMBER` / `NOT_FINITE` for a NaN or infinite
@@ -36,6 +60,12 @@ import type { DxfOptions } from './types.js';
  */
 export function templateToDxf(template: Template, options?: DxfOptions): string {
   const o = resolveDxfOptions(options);
-  const sheet = buildSheet(template, o);
-  return o.version === 'R12' ? writeR12(sheet) : writeAc1021(sheet);
+  const plan = planSheet(template, {
+    sheetUnits: o.units,
+    ...(o.job === '' ? {} : { job: o.job }),
+    ...(o.piece === '' ? {} : { piece: o.piece }),
+    textScale: o.textHeightMm / DEFAULT_TEXT_HEIGHT_MM,
+    stationNumbers: o.stationNumbers,
+  });
+  return planToDxf(plan, { units: o.units, version: o.version, joinEpsMm: o.joinEpsMm });
 }

@@ -36,10 +36,16 @@ export interface DxfOptions {
   readonly job?: string;
   /** Piece or spool mark for the title text (any text; made ASCII-safe). */
   readonly piece?: string;
-  /** Cap height of the title line in mm, (0, 100]; default 5. Notes and the caution are 0.7 of it. */
+  /**
+   * Cap height of the title line in mm, (0, 100]; default that of the sheet plan
+   * (2.92 mm, as on the SVG). The rest of the title block scales with it.
+   */
   readonly textHeightMm?: number;
   /** Write each station's number beside its station line; default true. */
   readonly stationNumbers?: boolean;
   /** Path ends closer than this (mm) are joined, (0, 1]; default {@link JOIN_EPS_MM}. */
   readonly joinEpsMm?: number;
 }
+
+/** Options of {@link planToDxf}: how to write, not what (the plan already holds the text). */
+export type DxfWriteOptions = Pick<DxfOptions, 'units' | 'version' | 'joinEpsMm'>;

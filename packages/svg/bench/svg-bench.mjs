@@ -34,6 +34,7 @@ function wrapTemplate(points) {
     wrapOdMm: od,
     cut: [{ kind: 'polyline', points: cut, closed: false }],
     squareLine: { kind: 'segment', from: [0, 0], to: [Math.PI * od, 0] },
+    startLine: 'heel',
     stationLines,
     marks: [],
     labels: [

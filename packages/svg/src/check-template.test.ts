@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { girthErrorOf } from '@girth/pipes/test-support';
 import type { PathPart, Point2, Template } from '@girth/unroll';
-import { arcSweepDeg, checkTemplate } from './check-template.js';
+import { arcSweepDeg, checkTemplate } from '@girth/sheet';
 import { templateToSvg } from './template-to-svg.js';
 import { coneSector, planeCutWrap, teeHole } from './test-support/fixtures.js';
 
@@ -55,7 +55,7 @@ describe('checkTemplate', () => {
   test('a template with nothing to cut, or a wrap without its stretch-out, is refused', () => {
     expect(girthErrorOf(() => checkTemplate({ ...wrap, cut: [] })).code).toBe('EMPTY_INPUT');
     const { stretchOutMm: _s, ...noStretch } = wrap;
-    const e = girthErrorOf(() => checkTemplate(noStretch));
+    const e = girthErrorOf(() => checkTemplate(noStretch as Template));
     expect(e.code).toBe('EMPTY_INPUT');
     expect(e.field).toBe('template.stretchOutMm');
   });

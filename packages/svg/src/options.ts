@@ -1,38 +1,11 @@
 /**
- * Checking and defaulting the options of the SVG exporter.
+ * Checking and defaulting the options of the SVG exporter (the sheet plan's
+ * options, checked by `resolveSheetOptions` of `@girth/sheet`).
  */
-import { GirthError, requireInRange } from '@girth/pipes';
-import type { ResolvedSvgOptions, SheetUnits, SvgOptions } from './types.js';
+import { resolveSheetOptions } from '@girth/sheet';
+import type { ResolvedSvgOptions, SvgOptions } from './types.js';
 
-/** Default blank paper around the drawing, mm. */
-export const DEFAULT_MARGIN_MM = 10;
-/** Default glue tab past the stretch-out of a wrap, mm. */
-export const DEFAULT_OVERLAP_MM = 25;
-/** Largest accepted margin, mm. */
-export const MAX_MARGIN_MM = 100;
-/** Largest accepted glue tab, mm. */
-export const MAX_OVERLAP_MM = 200;
-/** Longest accepted job or piece label, characters. */
-export const MAX_LABEL_CHARS = 200;
-
-const SHEET_UNITS: readonly SheetUnits[] = ['mm', 'in'];
-
-function optionalLabel(value: unknown, field: 'job' | 'piece'): string | undefined {
-  if (value === undefined) return undefined;
-  if (typeof value !== 'string') {
-    throw new GirthError('BAD_OPTION', field, `${field}: expected text, got ${typeof value}`, value);
-  }
-  const chars = [...value].length;
-  if (chars > MAX_LABEL_CHARS) {
-    throw new GirthError(
-      'BAD_OPTION',
-      field,
-      `${field}: at most ${MAX_LABEL_CHARS} characters, got ${chars}`,
-      value,
-    );
-  }
-  return value;
-}
+export { DEFAULT_MARGIN_MM, DEFAULT_OVERLAP_MM, MAX_LABEL_CHARS, MAX_MARGIN_MM, MAX_OVERLAP_MM } from '@girth/sheet';
 
 /**
  * Checks the options of {@link templateToSvg} and fills in the defaults.
@@ -52,24 +25,12 @@ function optionalLabel(value: unknown, field: 'job' | 'piece'): string | undefin
  * ```
  */
 export function resolveSvgOptions(options: SvgOptions = {}): ResolvedSvgOptions {
-  const units: unknown = options.sheetUnits ?? 'mm';
-  if (!SHEET_UNITS.includes(units as SheetUnits)) {
-    throw new GirthError(
-      'UNKNOWN_UNIT',
-      'sheetUnits',
-      `sheetUnits: must be 'mm' or 'in', got ${JSON.stringify(units)}`,
-      units,
-    );
-  }
-  const marginMm = requireInRange(options.marginMm ?? DEFAULT_MARGIN_MM, 'marginMm', 0, MAX_MARGIN_MM, { unit: 'mm' });
-  const overlapMm = requireInRange(options.overlapMm ?? DEFAULT_OVERLAP_MM, 'overlapMm', 0, MAX_OVERLAP_MM, {
-    unit: 'mm',
+  const o = resolveSheetOptions({
+    ...(options.sheetUnits === undefined ? {} : { sheetUnits: options.sheetUnits }),
+    ...(options.marginMm === undefined ? {} : { marginMm: options.marginMm }),
+    ...(options.overlapMm === undefined ? {} : { overlapMm: options.overlapMm }),
+    ...(options.job === undefined ? {} : { job: options.job }),
+    ...(options.piece === undefined ? {} : { piece: options.piece }),
   });
-  return {
-    sheetUnits: units as SheetUnits,
-    marginMm,
-    overlapMm,
-    job: optionalLabel(options.job, 'job'),
-    piece: optionalLabel(options.piece, 'piece'),
-  };
+  return { sheetUnits: o.sheetUnits, marginMm: o.marginMm, overlapMm: o.overlapMm, job: o.job, piece: o.piece };
 }

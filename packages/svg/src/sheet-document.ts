@@ -2,10 +2,9 @@
  * The parts of the SVG document that describe rather than draw: `<title>`,
  * `<desc>` and `<metadata>` (job, piece, template id, stretch-out).
  */
-import type { INode } from 'svgson';
-import { CAUTION, type Template } from '@girth/unroll';
-import type { ResolvedSvgOptions } from './types.js';
-import { el, textNodes } from './internal/nodes.js';
+import { CAUTION } from '@girth/unroll';
+import type { SheetPlan } from '@girth/sheet';
+import { el, textData } from './internal/xml.js';
 import { textLines } from './internal/safe-text.js';
 
 /** Namespace of Girth's own metadata element. */
@@ -19,26 +18,27 @@ const mm3 = (v: number): string => String(Math.round(v * 1000) / 1000);
 /**
  * `<title>`, `<desc>` and `<metadata>` for a sheet (user text cleaned to one line).
  *
- * @example describeSheet(template, resolveSvgOptions({ job: 'J-1' }))[0].name // 'title'
+ * @example describeSheet(planSheet(template, { job: 'J-1' }))[0] // '<title>J-1 — …</title>'
  */
-export function describeSheet(template: Template, options: ResolvedSvgOptions): INode[] {
-  const who = [options.job, options.piece].filter((s): s is string => s !== undefined).map(oneLine);
-  const title = [...who, oneLine(template.title)].join(' — ');
-  const desc = [...template.notes.map(oneLine), CAUTION].join('\n');
+export function describeSheet(plan: SheetPlan): string[] {
+  const t = plan.template;
+  const who = [plan.job, plan.piece].filter((s): s is string => s !== undefined).map(oneLine);
+  const title = [...who, oneLine(t.title)].join(' — ');
+  const desc = [...t.notes.map(oneLine), CAUTION].join('\n');
   return [
-    el('title', {}, textNodes(title)),
-    el('desc', {}, textNodes(desc)),
+    el('title', {}, [textData(title)]),
+    el('desc', {}, [textData(desc)]),
     el('metadata', {}, [
       el('girth:sheet', {
         'xmlns:girth': GIRTH_SVG_NAMESPACE,
-        job: options.job,
-        piece: options.piece,
-        'template-id': template.id,
-        'template-kind': template.kind,
-        'stretch-out-mm': template.stretchOutMm === undefined ? undefined : mm3(template.stretchOutMm),
-        'wrap-od-mm': template.wrapOdMm === undefined ? undefined : mm3(template.wrapOdMm),
-        'overlap-mm': template.kind === 'wrap' ? mm3(options.overlapMm) : undefined,
-        'sheet-units': options.sheetUnits,
+        job: plan.job,
+        piece: plan.piece,
+        'template-id': t.id,
+        'template-kind': t.kind,
+        'stretch-out-mm': t.stretchOutMm === undefined ? undefined : mm3(t.stretchOutMm),
+        'wrap-od-mm': t.wrapOdMm === undefined ? undefined : mm3(t.wrapOdMm),
+        'overlap-mm': t.kind === 'wrap' ? mm3(plan.overlapMm) : undefined,
+        'sheet-units': plan.units,
       }),
     ]),
   ];

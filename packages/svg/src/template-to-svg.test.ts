@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { templateToSvg } from './template-to-svg.js';
-import { STROKE_MM } from './style.js';
+import { STROKE_MM } from '@girth/sheet';
 import { coneSector, DEMO_JOB, DEMO_PIECE, planeCutWrap, teeHole } from './test-support/fixtures.js';
 import { byId, elements, parseSvg, sheetSize, textOf } from './test-support/parse.js';
 import { pathBounds, readPath, type ReadPath } from './test-support/path-geometry.js';

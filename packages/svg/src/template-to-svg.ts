@@ -1,34 +1,12 @@
 /**
- * A template drawn as an SVG sheet at true physical size.
+ * A template drawn as an SVG sheet at true physical size: the sheet planned by
+ * `planSheet` of `@girth/sheet`, written by {@link planToSvg}.
  */
-import { stringify } from 'svgson';
+import { planSheet } from '@girth/sheet';
 import type { Template } from '@girth/unroll';
 import type { SvgOptions } from './types.js';
 import { resolveSvgOptions } from './options.js';
-import { checkTemplate } from './check-template.js';
-import { MAX_STROKE_MM, TITLE_GAP_MM } from './style.js';
-import { describeSheet } from './sheet-document.js';
-import { EMPTY_BOX, growBox, partBox, pointsBox, unionBox, type Box } from './internal/box.js';
-import { frameAt } from './internal/frame.js';
-import { el } from './internal/nodes.js';
-import { numberWriter } from './internal/numbers.js';
-import { planStationNumbers } from './layers/station-numbers.js';
-import { planLabels } from './layers/labels.js';
-import { planOverlap } from './layers/overlap-plan.js';
-import { cutGroup, labelsGroup, marksGroup, squareLineGroup, stationsGroup } from './layers/geometry-groups.js';
-import { overlapGroup } from './layers/overlap-group.js';
-import { planTitleLines } from './layers/title-lines.js';
-import { calibrationGroup, planTitleBlock, titleBlockGroup } from './layers/title-block.js';
-
-/** Box of the lines of a template (cut, square line, stations, marks), template mm. */
-function geometryBox(template: Template): Box {
-  let box = EMPTY_BOX;
-  for (const part of template.cut) box = unionBox(box, partBox(part));
-  for (const part of template.marks) box = unionBox(box, partBox(part));
-  if (template.squareLine) box = unionBox(box, partBox(template.squareLine));
-  for (const s of template.stationLines) box = unionBox(box, pointsBox([s.from, s.to]));
-  return box;
-}
+import { planToSvg } from './plan-to-svg.js';
 
 /**
  * Draws a template as an SVG sheet at true physical size.
@@ -58,54 +36,5 @@ function geometryBox(template: Template): Box {
  * ```
  */
 export function templateToSvg(template: Template, options?: SvgOptions): string {
-  const opts = resolveSvgOptions(options);
-  checkTemplate(template);
-  const w = numberWriter(opts.sheetUnits);
-
-  // What the drawing covers, in template mm (y-up): lines, then text and tab.
-  const geometry = geometryBox(template);
-  const numbers = planStationNumbers(template.stationLines);
-  const labels = planLabels(template.labels);
-  const overlap =
-    template.kind === 'wrap' && opts.overlapMm > 0 && template.stretchOutMm !== undefined
-      ? planOverlap(geometry, template.stretchOutMm, opts.overlapMm)
-      : undefined;
-  let drawing = growBox(geometry, MAX_STROKE_MM / 2);
-  for (const t of [...numbers, ...labels]) drawing = unionBox(drawing, t.box);
-  if (overlap) drawing = unionBox(drawing, growBox(overlap.box, MAX_STROKE_MM / 2));
-
-  // The paper, mm (y-down): drawing at the top left, title block under it.
-  const drawingW = drawing.maxX - drawing.minX;
-  const drawingH = drawing.maxY - drawing.minY;
-  const m = opts.marginMm;
-  const frame = frameAt(drawing.minX, drawing.maxY, m, m);
-  const titleTop = m + drawingH + TITLE_GAP_MM;
-  const title = planTitleBlock(planTitleLines(template, opts), opts.sheetUnits);
-  const contentW = Math.max(drawingW, title.widthMm);
-  const widthMm = 2 * m + contentW;
-  const heightMm = titleTop + title.heightMm + m;
-
-  const svg = el(
-    'svg',
-    {
-      xmlns: 'http://www.w3.org/2000/svg',
-      version: '1.1',
-      width: `${w.len(widthMm)}${opts.sheetUnits}`,
-      height: `${w.len(heightMm)}${opts.sheetUnits}`,
-      viewBox: `0 0 ${w.len(widthMm)} ${w.len(heightMm)}`,
-      class: `girth-sheet girth-${template.kind}`,
-    },
-    [
-      ...describeSheet(template, opts),
-      overlapGroup(overlap, frame, w),
-      marksGroup(template, frame, w),
-      stationsGroup(template, numbers, frame, w),
-      squareLineGroup(template, frame, w),
-      cutGroup(template, frame, w),
-      labelsGroup(labels, frame, w),
-      titleBlockGroup(title, m, titleTop, contentW, w),
-      calibrationGroup(title, m, titleTop, w),
-    ],
-  );
-  return `<?xml version="1.0" encoding="UTF-8"?>\n${stringify(svg)}\n`;
+  return planToSvg(planSheet(template, resolveSvgOptions(options)));
 }

@@ -2,8 +2,10 @@
  * Options and units of the SVG exporter.
  */
 
+import type { SheetUnits } from '@girth/sheet';
+
 /** Units of the sheet: the SVG's `width`/`height` and its user unit (1 user unit = 1 mm or 1 in). */
-export type SheetUnits = 'mm' | 'in';
+export type { SheetUnits };
 
 /**
  * Options of {@link templateToSvg}. Every field is optional; lengths are in mm

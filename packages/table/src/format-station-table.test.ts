@@ -64,7 +64,7 @@ describe('formatStationTable', () => {
   });
 
   it('keeps a heading with line breaks on one line', () => {
-    const hostile: Template = { ...NPS6, stationColumns: [{ key: 'cutback', heading: 'Cut\nback\r\n' }] };
+    const hostile: Template = { ...NPS6, stationColumns: [{ key: 'cutback', heading: 'Cut\nback\r\n', quantity: 'length' }] };
     const t = formatStationTable(hostile, { format: 'in', caution: false });
     expect(t.split('\n')).toHaveLength(3 + 2 + 16 + 1);
   });
@@ -74,16 +74,16 @@ describe('formatStationTable', () => {
       [() => formatStationTable(NPS6, { format: 'yd' as never }), 'BAD_OPTION', 'options.format'],
       [() => formatStationTable(NPS6, { format: 'ft-in', fraction: 10 as never }), 'BAD_OPTION', ''],
       [
-        () => formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: 0, cutback: undefined as never } }] }, { format: 'mm' }),
+        () => formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: 0, values: { girth: 0, cutback: undefined as never } }] }, { format: 'mm' }),
         'NOT_A_NUMBER',
-        'template.stations[0].lengthsMm.cutback',
+        'template.stations[0].values.cutback',
       ],
       [
-        () => formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: Number.POSITIVE_INFINITY, cutback: 0 } }] }, { format: 'mm' }),
+        () => formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: 0, values: { girth: Number.POSITIVE_INFINITY, cutback: 0 } }] }, { format: 'mm' }),
         'NOT_FINITE',
-        'template.stations[0].lengthsMm.girth',
+        'template.stations[0].values.girth',
       ],
-      [() => formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: Number.NaN, lengthsMm: {} }] }, { format: 'mm' }), 'NOT_A_NUMBER', 'template.stations[0].angleDeg'],
+      [() => formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: Number.NaN, values: {} }] }, { format: 'mm' }), 'NOT_A_NUMBER', 'template.stations[0].angleDeg'],
     ];
     for (const [fn, code, field] of cases) {
       let caught: unknown;
@@ -101,7 +101,7 @@ describe('formatStationTable', () => {
 
   it('prints a dash where a station has no value in a column (the key is left out of the row)', () => {
     // Invariant of the table layout: a row without a key gets a blank cell, the others keep their values.
-    const text = formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: 25.4 } }] }, { format: 'in' });
+    const text = formatStationTable({ ...NPS6, stations: [{ n: 1, angleDeg: 0, values: { girth: 25.4 } }] }, { format: 'in' });
     const row = text.split('\n').find((l) => /^\s*1\s/.test(l));
     expect(row?.trim().split(/\s+/)).toEqual(['1', '0', '1.000"', '-']);
   });

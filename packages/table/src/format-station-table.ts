@@ -53,7 +53,7 @@ export function formatStationTable(template: Template, options: StationTableText
   const widths = headings.map((_, c) => Math.max(...cells.map((r) => r[c]!.length)));
   const line = (r: readonly string[]): string => r.map((cell, c) => cell.padStart(widths[c]!)).join(GAP).trimEnd();
   const out: string[] = [oneLine(String(template.title ?? template.id))];
-  if (template.stretchOutMm !== undefined) out.push(`Stretch-out: ${tableLength(template.stretchOutMm, options, 'template.stretchOutMm')}`);
+  if (template.kind === 'wrap') out.push(`Stretch-out: ${tableLength(template.stretchOutMm, options, 'template.stretchOutMm')}`);
   out.push('', line(cells[0]!), widths.map((w) => '-'.repeat(w)).join(GAP));
   for (const r of cells.slice(1)) out.push(line(r));
   if (options.caution ?? true) out.push('', CAUTION);

@@ -60,12 +60,12 @@ describe('toResultJson', () => {
     const cases: Array<[() => unknown, string, string]> = [
       [() => toResultJson(base, { units: 'ft' as never }), 'BAD_OPTION', 'options.units'],
       [
-        () => toResultJson({ ...base, templates: [{ ...wrap, stations: [{ n: 1, angleDeg: 0, lengthsMm: { girth: Number.NaN, cutback: 0 } }] }, base.templates[1]] }, { units: 'mm' }),
+        () => toResultJson({ ...base, templates: [{ ...wrap, stations: [{ n: 1, angleDeg: 0, values: { girth: Number.NaN, cutback: 0 } }] }, base.templates[1]] }, { units: 'mm' }),
         'NOT_A_NUMBER',
-        'templates[0].stations[0].lengthsMm.girth',
+        'templates[0].stations[0].values.girth',
       ],
       [() => toResultJson({ ...base, pipes: [{ ...base.pipes[0]!, odMm: Infinity }] }, { units: 'in' }), 'NOT_FINITE', 'pipes[0].odMm'],
-      [() => toResultJson({ ...base, templates: [{ ...wrap, stationColumns: [{ key: 'n', heading: 'N' }] }, base.templates[1]] }, { units: 'in' }), 'BAD_JOB', 'templates[0].stationColumns'],
+      [() => toResultJson({ ...base, templates: [{ ...wrap, stationColumns: [{ key: 'n', heading: 'N', quantity: 'length' }] }, base.templates[1]] }, { units: 'in' }), 'BAD_JOB', 'templates[0].stationColumns'],
       [() => toResultJson({ ...base, offsetMm: Number.NaN }, { units: 'in' }), 'NOT_A_NUMBER', 'offsetMm'],
     ];
     for (const [fn, code, field] of cases) {
@@ -86,7 +86,7 @@ describe('toResultJson', () => {
     // Invariant: 1e300 mm times 1e6 overflows; the value must pass through unrounded, and JSON must not write null.
     const base = sampleResult();
     const [first, second] = base.templates;
-    const big = { ...first, stations: first.stations.map((st) => ({ ...st, lengthsMm: { ...st.lengthsMm, cutback: 1e300 } })) };
+    const big = { ...first, stations: first.stations.map((st) => ({ ...st, values: { ...st.values, cutback: 1e300 } })) };
     const json = JSON.parse(JSON.stringify(toResultJson({ ...base, templates: [big, second] }, { units: 'mm' })));
     expect(json.templates[0].stations[0].cutback).toBe(1e300);
   });

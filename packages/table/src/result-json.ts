@@ -46,14 +46,17 @@ function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: strin
       angleDeg: denoise(requireFinite(s.angleDeg, `${sf}.angleDeg`)),
     };
     for (const c of columns) {
-      if (hasStationValue(s, c.key)) row[c.key] = toUnit(s.lengthsMm[c.key], `${sf}.lengthsMm.${c.key}`);
+      if (!hasStationValue(s, c.key)) continue;
+      const vf = `${sf}.values.${c.key}`;
+      // Only lengths take the job's unit; angles stay in degrees and counts as they are.
+      row[c.key] = c.quantity === 'length' || c.quantity === undefined ? toUnit(s.values[c.key], vf) : denoise(requireFinite(s.values[c.key], vf));
     }
     return row as StationJson;
   });
   return {
     id: String(t.id),
     title: String(t.title ?? ''),
-    ...(t.stretchOutMm === undefined ? {} : { stretchOut: toUnit(t.stretchOutMm, `${field}.stretchOutMm`) }),
+    ...(t.kind === 'wrap' ? { stretchOut: toUnit(t.stretchOutMm, `${field}.stretchOutMm`) } : {}),
     stations,
   };
 }
@@ -98,7 +101,7 @@ function pipeJson(p: PipeUsed, i: number, toUnit: (mm: unknown, field: string) =
  * @param options `units` `'in' | 'mm'`.
  * @throws GirthError `BAD_OPTION` for unknown units; `NOT_A_NUMBER` /
  *   `NOT_FINITE` naming a missing or non-finite value, e.g.
- *   `templates[0].stations[3].lengthsMm.cutback` or `pieces[1].center`;
+ *   `templates[0].stations[3].values.cutback` or `pieces[1].center`;
  *   `BAD_JOB` for a station column named `n` or `angleDeg`.
  * @example
  * ```ts

@@ -22,8 +22,8 @@ describe('stationTableCsv', () => {
     const hostile: Template = {
       ...NPS6,
       stationColumns: [
-        { key: 'girth', heading: 'Girth, "around"\r\nthe OD' },
-        { key: 'cutback', heading: '=HYPERLINK("http://example.invalid","x")' },
+        { key: 'girth', heading: 'Girth, "around"\r\nthe OD', quantity: 'length' },
+        { key: 'cutback', heading: '=HYPERLINK("http://example.invalid","x")', quantity: 'length' },
       ],
     };
     const records = parseCsv(stationTableCsv(hostile, { format: 'mm' }));

@@ -64,30 +64,38 @@ export interface TemplateLabel {
 /** What the template is for: wrapped around a pipe, marked on a header, or cut from flat plate. */
 export type TemplateKind = 'wrap' | 'hole' | 'flat';
 
-/** A column of the station table: the key in `StationRow.lengthsMm` and in the JSON contract. */
+/**
+ * What a station column measures, so exporters convert it on purpose:
+ * `length` in mm (converted to the job's unit), `angle` in degrees (never
+ * converted), `count` a plain number (never converted).
+ */
+export type StationQuantity = 'length' | 'angle' | 'count';
+
+/** A column of the station table: the key in `StationRow.values` and in the JSON contract. */
 export interface StationColumn {
   /** Contract key, e.g. `girth`, `cutback`, `axial`. Never rename once published. */
   readonly key: string;
   /** Heading a fitter reads, e.g. `Cutback`. */
   readonly heading: string;
+  /** What the values measure: lengths in mm, angles in degrees or counts. */
+  readonly quantity: StationQuantity;
 }
 
 /**
- * One row of the station table. Lengths in mm, keyed as the template's
- * `stationColumns`. A row leaves a key out where it has no value in that column
- * (exporters print an empty cell and the JSON omits the key); a key that is
- * present always holds a finite number.
+ * One row of the station table, keyed as the template's `stationColumns`:
+ * lengths in mm, angles in degrees, counts as plain numbers (see
+ * `StationColumn.quantity`). A row leaves a key out where it has no value in
+ * that column (exporters print an empty cell and the JSON omits the key); a
+ * key that is present always holds a finite number.
  */
 export interface StationRow {
   readonly n: number;
   readonly angleDeg: number;
-  readonly lengthsMm: Readonly<Record<string, number>>;
+  readonly values: Readonly<Record<string, number>>;
 }
 
-/**
- * A developed template: everything an exporter draws, and the station table.
- */
-export interface Template {
+/** What every template has, whatever its kind. */
+export interface TemplateBase {
   /** Contract id: `branch-cut`, `header-hole`, `miter-end`, `miter-middle`, `plane-cut`, `cone-pattern`, ... */
   readonly id: string;
   readonly kind: TemplateKind;
@@ -97,14 +105,8 @@ export interface Template {
   readonly notes: readonly string[];
   /** The typed facts `title` and `notes` are worded from (see `describeResult`); absent on hand-made templates. */
   readonly facts?: TemplateFacts;
-  /** For wraps: the developed length of the girth, pi x the OD wrapped, mm. */
-  readonly stretchOutMm?: number;
-  /** For wraps: the OD the template wraps on, mm. */
-  readonly wrapOdMm?: number;
   /** The line(s) to cut on. Closed for holes and flat patterns. */
   readonly cut: readonly PathPart[];
-  /** The square line (wraps): a reference square to the pipe axis. */
-  readonly squareLine?: Segment2;
   /** Station lines with their numbers. */
   readonly stationLines: readonly StationLine[];
   /** Other layout marks: centre lines, top line, seam. */
@@ -113,6 +115,40 @@ export interface Template {
   readonly stationColumns: readonly StationColumn[];
   readonly stations: readonly StationRow[];
 }
+
+/** A template wrapped around a pipe's OD: x is the girth from station 1, y runs along the pipe. */
+export interface WrapTemplate extends TemplateBase {
+  readonly kind: 'wrap';
+  /** The developed length of the girth, pi x the OD wrapped, mm. */
+  readonly stretchOutMm: number;
+  /** The OD the template wraps on, mm. */
+  readonly wrapOdMm: number;
+  /** The square line: a reference square to the pipe axis. */
+  readonly squareLine: Segment2;
+  /**
+   * The line on the pipe that station 1 (edge x = 0) goes on, in the fitter's
+   * words, lower case: `heel` for branch and plane cuts, `throat` for miters.
+   */
+  readonly startLine: string;
+}
+
+/** A template laid on a header's OD to mark the hole: x is the girth from the top line, y the axial position. */
+export interface HoleTemplate extends TemplateBase {
+  readonly kind: 'hole';
+  /** The OD of the pipe the hole is marked on, mm. */
+  readonly wrapOdMm: number;
+}
+
+/** A flat pattern cut from plate (cones): plate coordinates. */
+export interface FlatTemplate extends TemplateBase {
+  readonly kind: 'flat';
+}
+
+/**
+ * A developed template: everything an exporter draws, and the station table;
+ * tagged by `kind` so each exporter handles each kind on purpose.
+ */
+export type Template = WrapTemplate | HoleTemplate | FlatTemplate;
 
 /** A pipe as a joint actually used it, for the result and the title block. */
 export interface PipeUsed {

@@ -10,6 +10,7 @@ import type { PathPart, Point2 } from '@girth/unroll';
 import type { DxfLayerRole } from '../types.js';
 import { bulgeOfSweep, pointOnCircle, sweepDeg, SWEEP_EPS_DEG } from './arc-math.js';
 import { checkCoordMm, checkLengthMm, checkPointMm } from './checks.js';
+import { MAX_COORD_MM } from '../tolerances.js';
 import type { SheetEntity, SheetVertex } from './sheet.js';
 
 /** An open run of vertices (mm) with the part it came from when it is a single arc or segment. */
@@ -46,7 +47,9 @@ function appendRun(chain: SheetVertex[], next: Run): void {
 function polylineVertices(points: readonly Point2[], field: string, eps: number): SheetVertex[] {
   const out: SheetVertex[] = [];
   points.forEach((p, i) => {
-    const [x, y] = checkPointMm(p, `${field}.points[${i}]`);
+    // The usual case (a finite point within reach) is read directly; the field path is made only for an error.
+    const ok = Array.isArray(p) && Math.abs(p[0]) <= MAX_COORD_MM && Math.abs(p[1]) <= MAX_COORD_MM;
+    const [x, y] = ok ? p : checkPointMm(p, `${field}.points[${i}]`);
     const v: SheetVertex = [x, y, 0];
     if (out.length === 0 || !near(out[out.length - 1]!, v, eps)) out.push(v);
   });

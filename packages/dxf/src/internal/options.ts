@@ -2,11 +2,12 @@
  * Validated exporter options with their defaults filled in.
  */
 import { GirthError, requireInRange } from '@girth/pipes';
+import { CAP_HEIGHT_EM, FONT_MM } from '@girth/sheet';
 import { JOIN_EPS_MM } from '../tolerances.js';
 import type { DxfOptions, DxfUnits, DxfVersion } from '../types.js';
 
-/** Default cap height of the title line, mm. */
-export const DEFAULT_TEXT_HEIGHT_MM = 5;
+/** Cap height of the title line when `textHeightMm` is not given, mm: the sheet plan's, as on the SVG. */
+export const DEFAULT_TEXT_HEIGHT_MM = FONT_MM.title * CAP_HEIGHT_EM;
 
 /** Options after checking, every field present. */
 export interface ResolvedDxfOptions {

@@ -27,7 +27,7 @@ export type SheetEntity =
       readonly height: number;
       /** Already made safe by `dxfSafeText`. */
       readonly text: string;
-      /** `left`: `at` is the left end of the baseline; `center`: `at` is the middle of the text. */
+      /** `left`: `at` is the left end of the baseline; `center`: `at` is the middle of the baseline. */
       readonly align: 'left' | 'center';
     };
 

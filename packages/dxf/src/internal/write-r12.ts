@@ -89,9 +89,8 @@ function writeEntity(g: Groups, e: SheetEntity): void {
       g.coord(40, e.height);
       g.push(1, e.text);
       if (e.align === 'center') {
-        g.push(72, '1'); // centred horizontally
+        g.push(72, '1'); // centred horizontally on the baseline (vertical alignment 0, the default)
         point(g, e.at[0], e.at[1], 11);
-        g.push(73, '2'); // middle vertically
       }
       return;
   }

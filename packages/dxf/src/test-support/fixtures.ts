@@ -14,12 +14,12 @@
  *   sweep 180° (D - d) / s (REFERENCES.md, cone development; L. Longfield,
  *   Sheet Metal Drafting, 1921).
  */
-import type { PathPart, Point2, StationLine, StationRow, Template } from '@girth/unroll';
+import type { FlatTemplate, HoleTemplate, PathPart, Point2, StationLine, StationRow, WrapTemplate } from '@girth/unroll';
 
 const DEG = Math.PI / 180;
 
 /** A wrap template of a plane cut at `cutAngleDeg` on a pipe of `odMm`, `samples` points along the girth. */
-export function planeCutWrap(odMm: number, cutAngleDeg: number, samples = 361, stationCount = 16): Template {
+export function planeCutWrap(odMm: number, cutAngleDeg: number, samples = 361, stationCount = 16): WrapTemplate {
   const r = odMm / 2;
   const girthMm = Math.PI * odMm;
   const ordinate = (phiRad: number): number => r * Math.tan(cutAngleDeg * DEG) * (1 - Math.cos(phiRad));
@@ -35,7 +35,7 @@ export function planeCutWrap(odMm: number, cutAngleDeg: number, samples = 361, s
     const x = r * angleDeg * DEG;
     const y = ordinate(angleDeg * DEG);
     stationLines.push({ n, angleDeg, from: [x, 0], to: [x, y] });
-    stations.push({ n, angleDeg, lengthsMm: { girth: x, cutback: y } });
+    stations.push({ n, angleDeg, values: { girth: x, cutback: y } });
   }
   return {
     id: 'plane-cut',
@@ -46,6 +46,7 @@ export function planeCutWrap(odMm: number, cutAngleDeg: number, samples = 361, s
     wrapOdMm: odMm,
     cut: [{ kind: 'polyline', points, closed: false }],
     squareLine: { kind: 'segment', from: [0, 0], to: [girthMm, 0] },
+    startLine: 'heel',
     stationLines,
     marks: [{ kind: 'segment', from: [girthMm, 0], to: [girthMm, ordinate(Math.PI * 2)] }],
     labels: [
@@ -53,8 +54,8 @@ export function planeCutWrap(odMm: number, cutAngleDeg: number, samples = 361, s
       { text: 'TOE', at: [girthMm / 2, -8], heightMm: 4 },
     ],
     stationColumns: [
-      { key: 'girth', heading: 'Girth' },
-      { key: 'cutback', heading: 'Cutback' },
+      { key: 'girth', heading: 'Girth', quantity: 'length' },
+      { key: 'cutback', heading: 'Cutback', quantity: 'length' },
     ],
     stations,
   };
@@ -68,14 +69,14 @@ export function teeHolePoint(headerOdMm: number, branchDiaMm: number, phiRad: nu
 }
 
 /** The closed hole of a 90° set-on branch (branch ID `branchIdMm`) on a header of `headerOdMm`. */
-export function teeHole(headerOdMm: number, branchIdMm: number, samples = 720): Template {
+export function teeHole(headerOdMm: number, branchIdMm: number, samples = 720): HoleTemplate {
   const points: Point2[] = [];
   for (let i = 0; i < samples; i++) points.push(teeHolePoint(headerOdMm, branchIdMm, (2 * Math.PI * i) / samples));
   const rows: StationRow[] = [];
   for (let n = 1; n <= 16; n++) {
     const angleDeg = (360 * (n - 1)) / 16;
     const [girth, axial] = teeHolePoint(headerOdMm, branchIdMm, angleDeg * DEG);
-    rows.push({ n, angleDeg, lengthsMm: { girth, axial } });
+    rows.push({ n, angleDeg, values: { girth, axial } });
   }
   const reach = points.reduce((m, p) => Math.max(m, Math.abs(p[0])), 0);
   return {
@@ -83,6 +84,7 @@ export function teeHole(headerOdMm: number, branchIdMm: number, samples = 720): 
     kind: 'hole',
     title: 'Header hole: 90° set-on branch',
     notes: ['Top line of the header at girth 0.'],
+    wrapOdMm: headerOdMm,
     cut: [{ kind: 'polyline', points, closed: true }],
     stationLines: [],
     marks: [
@@ -91,8 +93,8 @@ export function teeHole(headerOdMm: number, branchIdMm: number, samples = 720): 
     ],
     labels: [{ text: 'TOP', at: [0, branchIdMm + 8], heightMm: 4 }],
     stationColumns: [
-      { key: 'girth', heading: 'Girth' },
-      { key: 'axial', heading: 'Axial' },
+      { key: 'girth', heading: 'Girth', quantity: 'length' },
+      { key: 'axial', heading: 'Axial', quantity: 'length' },
     ],
     stations: rows,
   };
@@ -120,7 +122,7 @@ export function coneDevelopment(largeDiaMm: number, smallDiaMm: number, lengthMm
  * origin, symmetric about +y: outer arc, side, inner arc (walked backwards),
  * side, so the exporter must join and reverse parts to close it.
  */
-export function conePattern(largeDiaMm: number, smallDiaMm: number, lengthMm: number): Template {
+export function conePattern(largeDiaMm: number, smallDiaMm: number, lengthMm: number): FlatTemplate {
   const { outerRadiusMm, innerRadiusMm, sweepDeg } = coneDevelopment(largeDiaMm, smallDiaMm, lengthMm);
   const startDeg = 90 - sweepDeg / 2;
   const endDeg = 90 + sweepDeg / 2;

@@ -11,7 +11,7 @@
  * a thousandth of a millimetre.
  */
 import type { PathPart, Point2 } from '@girth/unroll';
-import { arcSweepDeg } from '../check-template.js';
+import { arcSweepDeg } from '@girth/sheet';
 import type { Frame } from './frame.js';
 import type { NumberWriter } from './numbers.js';
 

@@ -1,6 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
-import { attrText, cdataSafePieces, textLines } from './safe-text.js';
+import { attrText, textLines } from './safe-text.js';
+import { escapeXml } from './xml.js';
 
 describe('textLines', () => {
   test('splits at CR LF, CR and LF, drops controls, keeps printable text', () => {
@@ -37,14 +38,17 @@ describe('attrText', () => {
   });
 });
 
-describe('cdataSafePieces', () => {
-  test('no piece holds "]]>" and the pieces join back to the line', () => {
+describe('escapeXml', () => {
+  test('leaves no markup character and decodes back to the text (XML 1.0 predefined entities, section 4.6)', () => {
+    const decode = (s: string) =>
+      s.replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&apos;/g, "'").replace(/&amp;/g, '&');
     fc.assert(
-      fc.property(fc.array(fc.constantFrom(']', '>', ']]>', 'a', '<', '&')), (parts) => {
+      fc.property(fc.array(fc.constantFrom(']', '>', ']]>', 'a', '<', '&', '"', "'", '&amp;')), (parts) => {
         const line = parts.join('');
-        const pieces = cdataSafePieces(line);
-        expect(pieces.join('')).toBe(line);
-        for (const p of pieces) expect(p).not.toContain(']]>');
+        const out = escapeXml(line);
+        expect(out).not.toMatch(/[<>"']/);
+        expect(out.replace(/&(amp|lt|gt|quot|apos);/g, '')).not.toContain('&');
+        expect(decode(out)).toBe(line);
       }),
     );
   });

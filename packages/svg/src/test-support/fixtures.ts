@@ -3,7 +3,7 @@
  * @girth/unroll), so the exporter is checked against the outside.
  * Jobs and pieces are invented.
  */
-import type { PathPart, Point2, StationLine, StationRow, Template } from '@girth/unroll';
+import type { FlatTemplate, HoleTemplate, PathPart, Point2, StationLine, StationRow, WrapTemplate } from '@girth/unroll';
 
 const DEG = Math.PI / 180;
 
@@ -17,7 +17,7 @@ export const DEMO_PIECE = 'Spool 12-B';
  * ordinate (D/2) tan(c) (1 - cos phi) above the square line (REFERENCES.md, "Miter":
  * the ordinate of a plane cut), phi = 0 (heel, station 1) at x = 0, girth x = (D/2) phi.
  */
-export function planeCutWrap(odMm: number, cutDeg: number, stations = 16, pointsPerStation = 8): Template {
+export function planeCutWrap(odMm: number, cutDeg: number, stations = 16, pointsPerStation = 8): WrapTemplate {
   const r = odMm / 2;
   const stretchOutMm = Math.PI * odMm;
   const ordinate = (phi: number): number => r * Math.tan(cutDeg * DEG) * (1 - Math.cos(phi));
@@ -34,7 +34,7 @@ export function planeCutWrap(odMm: number, cutDeg: number, stations = 16, points
     const x = r * phi;
     const stationN = (k % stations) + 1;
     stationLines.push({ n: stationN, angleDeg: (360 * k) / stations, from: [x, 0], to: [x, ordinate(phi)] });
-    if (k < stations) rows.push({ n: stationN, angleDeg: (360 * k) / stations, lengthsMm: { girth: x, cutback: ordinate(phi) } });
+    if (k < stations) rows.push({ n: stationN, angleDeg: (360 * k) / stations, values: { girth: x, cutback: ordinate(phi) } });
   }
   return {
     id: 'plane-cut',
@@ -45,6 +45,7 @@ export function planeCutWrap(odMm: number, cutDeg: number, stations = 16, points
     wrapOdMm: odMm,
     cut: [{ kind: 'polyline', points, closed: false }],
     squareLine: { kind: 'segment', from: [0, 0], to: [stretchOutMm, 0] },
+    startLine: 'heel',
     stationLines,
     marks: [],
     labels: [
@@ -52,8 +53,8 @@ export function planeCutWrap(odMm: number, cutDeg: number, stations = 16, points
       { text: 'TOE', at: [stretchOutMm / 2, -10], heightMm: 4 },
     ],
     stationColumns: [
-      { key: 'girth', heading: 'Girth' },
-      { key: 'cutback', heading: 'Cutback' },
+      { key: 'girth', heading: 'Girth', quantity: 'length' },
+      { key: 'cutback', heading: 'Cutback', quantity: 'length' },
     ],
     stations: rows,
   };
@@ -64,7 +65,7 @@ export function planeCutWrap(odMm: number, cutDeg: number, stations = 16, points
  * (MathWorld, "Cylinder-Cylinder Intersection"): around the header
  * x = R asin(r sin phi / R), along it y = r cos phi. A closed, ellipse-like contour.
  */
-export function teeHole(RMm: number, rMm: number, points = 256): Template {
+export function teeHole(RMm: number, rMm: number, points = 256): HoleTemplate {
   const contour: Point2[] = [];
   for (let i = 0; i < points; i++) {
     const phi = (2 * Math.PI * i) / points;
@@ -95,7 +96,7 @@ export function teeHole(RMm: number, rMm: number, points = 256): Template {
  * slant s = sqrt(L² + ((D - d)/2)²), radii D s / (D - d) and d s / (D - d),
  * sweep 180° (D - d) / s. Centre at the origin, the sweep centred on +y.
  */
-export function coneSector(bigMm: number, smallMm: number, heightMm: number): Template {
+export function coneSector(bigMm: number, smallMm: number, heightMm: number): FlatTemplate {
   const s = Math.hypot(heightMm, (bigMm - smallMm) / 2);
   const outer = (bigMm * s) / (bigMm - smallMm);
   const inner = (smallMm * s) / (bigMm - smallMm);

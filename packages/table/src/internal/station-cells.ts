@@ -47,7 +47,7 @@ function angleDecimals(anglesDeg: readonly number[]): number {
  * diagonal before it); a key that is present must hold a finite number.
  */
 export function hasStationValue(row: Template['stations'][number], key: string): boolean {
-  return row.lengthsMm !== undefined && row.lengthsMm !== null && Object.prototype.hasOwnProperty.call(row.lengthsMm, key);
+  return row.values !== undefined && row.values !== null && Object.prototype.hasOwnProperty.call(row.values, key);
 }
 
 /** One length as the table writes it. */
@@ -61,10 +61,26 @@ export function tableLength(mm: unknown, options: StationTableOptions, field: st
 }
 
 /**
+ * One station value as the table writes it, by the column's quantity: a length
+ * in the table's format, an angle in degrees (to 0.001°, never converted), a
+ * count as a plain number (never converted).
+ */
+export function tableValue(
+  value: unknown,
+  quantity: Template['stationColumns'][number]['quantity'],
+  options: StationTableOptions,
+  field: string,
+): string {
+  if (quantity === 'angle') return String(Math.round(requireFinite(value, field) * 1000) / 1000);
+  if (quantity === 'count') return String(requireFinite(value, field));
+  return tableLength(value, options, field);
+}
+
+/**
  * Cells of the station table of a template.
  * @throws GirthError `BAD_OPTION` for an unknown format, fraction or decimals;
  *   `NOT_A_NUMBER` / `NOT_FINITE` naming the station and column of a missing
- *   or non-finite value, e.g. `template.stations[3].lengthsMm.cutback`.
+ *   or non-finite value, e.g. `template.stations[3].values.cutback`.
  */
 export function stationCells(template: Template, options: StationTableOptions): StationCells {
   checkTableOptions(options);
@@ -79,7 +95,9 @@ export function stationCells(template: Template, options: StationTableOptions): 
     String(requireFinite(s.n, `template.stations[${i}].n`)),
     angles[i]!.toFixed(decimals),
     ...columns.map((c) =>
-      hasStationValue(s, c.key) ? tableLength(s.lengthsMm[c.key], options, `template.stations[${i}].lengthsMm.${c.key}`) : options.blank ?? '',
+      hasStationValue(s, c.key)
+        ? tableValue(s.values[c.key], c.quantity, options, `template.stations[${i}].values.${c.key}`)
+        : options.blank ?? '',
     ),
   ]);
   return { headings: [STATION_HEADING, ANGLE_HEADING, ...columns.map((c) => String(c.heading))], rows };

@@ -6,7 +6,7 @@
  *   stretch-out pi x OD (REFERENCES.md, miter and girth); 16 stations of 22.5°
  *   (common practice).
  */
-import type { BranchLayout, StationRow, Template } from '@girth/unroll';
+import type { BranchLayout, StationRow, Template, WrapTemplate } from '@girth/unroll';
 
 /** Millimetres in one inch, exactly (international inch, 1959). */
 export const INCH = 25.4;
@@ -17,14 +17,14 @@ export function planeCutOrdinateMm(odMm: number, cutAngleDeg: number, phiDeg: nu
 }
 
 /** A wrap template of a plane cut with `stationCount` stations and nothing drawn but its cut. */
-export function planeCutWrap(odMm: number, cutAngleDeg: number, stationCount = 16): Template {
+export function planeCutWrap(odMm: number, cutAngleDeg: number, stationCount = 16): WrapTemplate {
   const stations: StationRow[] = [];
   for (let n = 1; n <= stationCount; n++) {
     const angleDeg = (360 * (n - 1)) / stationCount;
     stations.push({
       n,
       angleDeg,
-      lengthsMm: { girth: (Math.PI * odMm * angleDeg) / 360, cutback: planeCutOrdinateMm(odMm, cutAngleDeg, angleDeg) },
+      values: { girth: (Math.PI * odMm * angleDeg) / 360, cutback: planeCutOrdinateMm(odMm, cutAngleDeg, angleDeg) },
     });
   }
   return {
@@ -35,12 +35,14 @@ export function planeCutWrap(odMm: number, cutAngleDeg: number, stationCount = 1
     stretchOutMm: Math.PI * odMm,
     wrapOdMm: odMm,
     cut: [],
+    squareLine: { kind: 'segment', from: [0, 0], to: [Math.PI * odMm, 0] },
+    startLine: 'heel',
     stationLines: [],
     marks: [],
     labels: [],
     stationColumns: [
-      { key: 'girth', heading: 'Girth' },
-      { key: 'cutback', heading: 'Cutback' },
+      { key: 'girth', heading: 'Girth', quantity: 'length' },
+      { key: 'cutback', heading: 'Cutback', quantity: 'length' },
     ],
     stations,
   };
@@ -54,19 +56,19 @@ export function sampleResult(): BranchLayout {
   const od = 6.625 * INCH; // NPS 6, ASME B36.10M (recalled; REFERENCES.md)
   const wall = 0.28 * INCH; // STD
   const wrap = planeCutWrap(od, 22.5);
-  const { stretchOutMm: _wrapOnly, ...wrapBase } = wrap;
+  const { stretchOutMm: _wrapOnly, squareLine: _square, startLine: _start, ...wrapBase } = wrap;
   const hole: Template = {
     ...wrapBase,
     id: 'header-hole',
     kind: 'hole',
     title: 'Hole',
     stationColumns: [
-      { key: 'girth', heading: 'Girth' },
-      { key: 'axial', heading: 'Axial' },
+      { key: 'girth', heading: 'Girth', quantity: 'length' },
+      { key: 'axial', heading: 'Axial', quantity: 'length' },
     ],
     stations: [
-      { n: 1, angleDeg: 0, lengthsMm: { girth: 0, axial: INCH } },
-      { n: 2, angleDeg: 180, lengthsMm: { girth: 0, axial: -INCH } },
+      { n: 1, angleDeg: 0, values: { girth: 0, axial: INCH } },
+      { n: 2, angleDeg: 180, values: { girth: 0, axial: -INCH } },
     ],
   };
   return {

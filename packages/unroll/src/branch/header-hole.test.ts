@@ -62,8 +62,8 @@ describe('developHeaderHole', () => {
           const tol = 1e-9 * 12.75 * IN;
           here.stations.forEach((s, i) => {
             const t = there.stations[i]!;
-            expect(Math.abs(s.lengthsMm.girth! - t.lengthsMm.girth!)).toBeLessThan(tol);
-            expect(Math.abs(s.lengthsMm.axial! - t.lengthsMm.axial!)).toBeLessThan(tol);
+            expect(Math.abs(s.values.girth! - t.values.girth!)).toBeLessThan(tol);
+            expect(Math.abs(s.values.axial! - t.values.axial!)).toBeLessThan(tol);
           });
           // The centre mark (where the branch axis pierces the header) is found the same way.
           const mark = (t: typeof here): readonly [number, number] => {

@@ -2,7 +2,7 @@
  * The hole in the header for a branch, developed on the header OD.
  */
 import { developPoint, hitGenerator, type BranchGeometry, type GeneratorHit } from '@girth/geometry';
-import type { PathPart, Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
+import type { HoleTemplate, PathPart, Point2, StationLine, StationRow, TemplateLabel } from '../types.js';
 import { sampleCut } from '../wrap/sample-cut.js';
 import type { TemplateFacts } from '../facts.js';
 
@@ -40,9 +40,9 @@ export interface HeaderHoleInput {
  *
  * @throws GirthError as `sampleCut` (bad options; a generator that misses,
  *   which a solved branch never has).
- * @example developHeaderHole({ geometry: solveBranch(spec), stations: 16, title: 'Header hole', notes: [] }).stations[0]?.lengthsMm.axial
+ * @example developHeaderHole({ geometry: solveBranch(spec), stations: 16, title: 'Header hole', notes: [] }).stations[0]?.values.axial
  */
-export function developHeaderHole(input: HeaderHoleInput): Template {
+export function developHeaderHole(input: HeaderHoleInput): HoleTemplate {
   const g = input.geometry;
   // The hole host's own development: on a header, girth from the top line and axial from x = 0.
   const flatten = (hit: GeneratorHit): Point2 => developPoint(g.holeHost, hit.point);
@@ -62,7 +62,7 @@ export function developHeaderHole(input: HeaderHoleInput): Template {
   cut.stations.forEach((hit, i) => {
     const [girth, axial] = flatten(hit);
     const angleDeg = (360 * i) / n;
-    stations.push({ n: i + 1, angleDeg, lengthsMm: { girth, axial } });
+    stations.push({ n: i + 1, angleDeg, values: { girth, axial } });
     stationLines.push({ n: i + 1, angleDeg, from: [girth, 0], to: [girth, axial] });
   });
 
@@ -100,13 +100,14 @@ export function developHeaderHole(input: HeaderHoleInput): Template {
     title: input.title,
     notes: input.notes,
     ...(input.facts === undefined ? {} : { facts: input.facts }),
+    wrapOdMm: g.spec.header.odMm,
     cut: [{ kind: 'polyline', points: outline, closed: true }],
     stationLines,
     marks,
     labels,
     stationColumns: [
-      { key: 'girth', heading: 'Girth' },
-      { key: 'axial', heading: 'Axial' },
+      { key: 'girth', heading: 'Girth', quantity: 'length' },
+      { key: 'axial', heading: 'Axial', quantity: 'length' },
     ],
     stations,
   };

@@ -14,8 +14,8 @@ const DEG = Math.PI / 180;
 const NPS12 = { odMm: 12.75 * IN, wallMm: 0.375 * IN, label: 'NPS 12 STD' };
 const NPS6 = { odMm: 6.625 * IN, wallMm: 0.28 * IN, label: 'NPS 6 STD' };
 
-const cutbacks = (t: Template): number[] => t.stations.map((s) => s.lengthsMm.cutback!);
-const col = (t: Template, key: string): number[] => t.stations.map((s) => s.lengthsMm[key]!);
+const cutbacks = (t: Template): number[] => t.stations.map((s) => s.values.cutback!);
+const col = (t: Template, key: string): number[] => t.stations.map((s) => s.values[key]!);
 const points = (t: Template): readonly Point2[] => {
   const part = t.cut[0]!;
   if (part.kind !== 'polyline') throw new Error('expected a polyline');
@@ -54,8 +54,9 @@ describe('layoutBranch', () => {
     const h = (phi: number): number => R - Math.sqrt(R * R - r * r * Math.sin(phi) ** 2);
     const [cut] = layout.templates;
     expect(cut.id).toBe('branch-cut');
+    if (cut.kind !== 'wrap') throw new Error('the branch cut is a wrap');
     expectClose(cutbacks(cut), cut.stations.map((s) => h(90 * DEG) - h(s.angleDeg * DEG)), 1e-9, 'tee cutback mm');
-    expectClose(cut.stretchOutMm!, Math.PI * NPS6.odMm, 1e-9, 'stretch-out = π × branch OD');
+    expectClose(cut.stretchOutMm, Math.PI * NPS6.odMm, 1e-9, 'stretch-out = π × branch OD');
     expect(cut.wrapOdMm).toBe(NPS6.odMm);
   });
 
@@ -221,6 +222,14 @@ describe('layoutBranch', () => {
     expect(hole.labels.map((l) => l.text)).toEqual(['HEEL', 'TOE', 'TOP LINE']);
     const override = layoutBranch({ header: NPS12, branch: NPS6, contact: { branch: 'outside', header: 'outside' } });
     expect(override.templates[0].title).toBe('Branch cut: NPS 6 STD on NPS 12 STD, 90°, branch OD on header OD');
+  });
+
+  it('tells each template what it goes on: the branch cut wraps the branch OD from the heel, the hole lies on the header OD', () => {
+    // The hole template is marked on the header (common practice), so its sheet needs the header OD to say so.
+    const [cut, hole] = layoutBranch({ header: NPS12, branch: NPS6 }).templates;
+    if (cut?.kind !== 'wrap' || hole?.kind !== 'hole') throw new Error('expected a wrap and a hole');
+    expect(cut.startLine).toBe('heel');
+    expect(hole.wrapOdMm).toBe(NPS12.odMm);
   });
 
   it('marks the hole centre where the branch axis pierces the header OD', () => {

@@ -33,7 +33,7 @@ export const MAX_BRANCH_STATIONS = 360;
  * @example
  * const layout = layoutBranch({ header: { odMm: 323.85, wallMm: 9.525, label: 'NPS 12 STD' },
  *   branch: { odMm: 168.275, wallMm: 7.112, label: 'NPS 6 STD' }, angleDeg: 45 });
- * layout.templates[0].stations[0]?.lengthsMm.cutback // heel cutback, mm
+ * layout.templates[0].stations[0]?.values.cutback // heel cutback, mm
  */
 export function layoutBranch(spec: BranchSpec, options: LayoutBranchOptions = {}): BranchLayout {
   if (options === null || typeof options !== 'object') {

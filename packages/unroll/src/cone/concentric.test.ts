@@ -44,8 +44,8 @@ describe('concentric cone: development formulas (invariants)', () => {
         const inner = t.cut[2] as Arc2;
         expectNear((outer.radiusMm * (outer.endDeg - outer.startDeg) * Math.PI) / 180, Math.PI * D, 1e-9 * D, 'outer arc = π D');
         expectNear((inner.radiusMm * (inner.endDeg - inner.startDeg) * Math.PI) / 180, Math.PI * d, 1e-9 * D, 'inner arc = π d');
-        expectNear(t.stations.at(-1)!.lengthsMm.outerArc!, Math.PI * D, 1e-9 * D, 'table outer arc at the closing edge');
-        expectNear(t.stations.at(-1)!.lengthsMm.innerArc!, Math.PI * d, 1e-9 * D, 'table inner arc at the closing edge');
+        expectNear(t.stations.at(-1)!.values.outerArc!, Math.PI * D, 1e-9 * D, 'table outer arc at the closing edge');
+        expectNear(t.stations.at(-1)!.values.innerArc!, Math.PI * d, 1e-9 * D, 'table inner arc at the closing edge');
         expect(t.stations).toHaveLength(n + 1);
       }),
       { numRuns: 200 },
@@ -175,7 +175,7 @@ describe('concentric cone: segments', () => {
         const sum = r.templates.reduce((s, t) => s + ((t.cut[0] as Arc2).endDeg - (t.cut[0] as Arc2).startDeg), 0);
         expectNear(sum, whole.pattern.sweepDeg, 1e-9, 'sum of piece sweeps');
         expectNear(r.pieces.reduce((s, p) => s + p.sweepDeg, 0), whole.pattern.sweepDeg, 1e-9, 'sum of piece sweeps (result)');
-        const girth = r.templates.reduce((s, t) => s + t.stations.at(-1)!.lengthsMm.outerArc!, 0);
+        const girth = r.templates.reduce((s, t) => s + t.stations.at(-1)!.values.outerArc!, 0);
         expectNear(girth, Math.PI * c.largeDiameterMm, 1e-9 * c.largeDiameterMm, 'girths add up to π D');
         r.templates.forEach((t, j) => {
           expect(t.stations.map((s) => s.n)).toEqual(Array.from({ length: 24 / k + 1 }, (_, i) => (j * 24) / k + i + 1));

@@ -87,7 +87,7 @@ export function layoutConcentricCone(spec: ConeSpec, options: ConeLayoutOptions 
       stations.push({
         n: g + 1,
         angleDeg,
-        lengthsMm: { outerArc: meanR * localDeg * RAD, innerArc: meanr * localDeg * RAD, element: slant },
+        values: { outerArc: meanR * localDeg * RAD, innerArc: meanr * localDeg * RAD, element: slant },
       });
     }
     const midRadius = (pattern.outerRadius + pattern.innerRadius) / 2;
@@ -138,9 +138,9 @@ export function layoutConcentricCone(spec: ConeSpec, options: ConeLayoutOptions 
       marks: [],
       labels,
       stationColumns: [
-        { key: 'outerArc', heading: 'Outer arc' },
-        { key: 'innerArc', heading: 'Inner arc' },
-        { key: 'element', heading: 'Element' },
+        { key: 'outerArc', heading: 'Outer arc', quantity: 'length' },
+        { key: 'innerArc', heading: 'Inner arc', quantity: 'length' },
+        { key: 'element', heading: 'Element', quantity: 'length' },
       ],
       stations,
     });

@@ -42,8 +42,8 @@ describe('eccentric cone: elements (invariants of a cone with one side flat)', (
         const flatRow = rows.find((x) => x.angleDeg === (seam === 'flat-side' ? 0 : 180))!;
         const oppRow = rows.find((x) => x.angleDeg === (seam === 'flat-side' ? 180 : 0))!;
         const L = c.lengthMm;
-        expectNear(flatRow.lengthsMm.element!, L, 1e-9 * L, 'flat-side element');
-        expectNear(oppRow.lengthsMm.element!, Math.hypot(L, c.largeDiameterMm - c.smallDiameterMm), 1e-9 * (L + c.largeDiameterMm), 'opposite element');
+        expectNear(flatRow.values.element!, L, 1e-9 * L, 'flat-side element');
+        expectNear(oppRow.values.element!, Math.hypot(L, c.largeDiameterMm - c.smallDiameterMm), 1e-9 * (L + c.largeDiameterMm), 'opposite element');
       }),
       { numRuns: 40 },
     );
@@ -56,14 +56,14 @@ describe('eccentric cone: elements (invariants of a cone with one side flat)', (
     const r = layoutEccentricCone({ largeDiameterMm: D, smallDiameterMm: d, lengthMm: L, thicknessMm: 0 }, { stations: 12 });
     const { A, B } = circlePoints(D, d, L, 'flat-side', 12, 0, 13);
     for (const [i, row] of r.templates[0]!.stations.entries()) {
-      expectNear(row.lengthsMm.element!, d3(A[i]!, B[i]!), 1e-9, `element ${row.n}`);
+      expectNear(row.values.element!, d3(A[i]!, B[i]!), 1e-9, `element ${row.n}`);
       if (i === 0) {
-        expect(row.lengthsMm.diagonal).toBeUndefined();
+        expect(row.values.diagonal).toBeUndefined();
         continue;
       }
-      expectNear(row.lengthsMm.diagonal!, d3(A[i - 1]!, B[i]!), 1e-9, `diagonal ${row.n}`);
-      expectNear(row.lengthsMm.largeStep!, 2 * (D / 2) * Math.sin(Math.PI / 12), 1e-9, `large step ${row.n}`);
-      expectNear(row.lengthsMm.smallStep!, 2 * (d / 2) * Math.sin(Math.PI / 12), 1e-9, `small step ${row.n}`);
+      expectNear(row.values.diagonal!, d3(A[i - 1]!, B[i]!), 1e-9, `diagonal ${row.n}`);
+      expectNear(row.values.largeStep!, 2 * (D / 2) * Math.sin(Math.PI / 12), 1e-9, `large step ${row.n}`);
+      expectNear(row.values.smallStep!, 2 * (d / 2) * Math.sin(Math.PI / 12), 1e-9, `small step ${row.n}`);
     }
   });
 });
@@ -226,7 +226,7 @@ describe('eccentric cone: segments', () => {
         const last = r.templates[j]!.stations.at(-1)!;
         const first = r.templates[j + 1]!.stations[0]!;
         expect(last.n).toBe(first.n);
-        expectNear(last.lengthsMm.element!, first.lengthsMm.element!, 1e-12, 'shared element');
+        expectNear(last.values.element!, first.values.element!, 1e-12, 'shared element');
       }
     }
   });
@@ -255,7 +255,7 @@ describe('eccentric cone: template', () => {
     // Station lines run from the large edge to the small edge at every station, each as long as its element.
     expect(t.stationLines).toHaveLength(13);
     for (const [i, line] of t.stationLines.entries()) {
-      expectNear(d2(line.from, line.to), t.stations[i]!.lengthsMm.element!, 1e-9, `station line ${line.n}`);
+      expectNear(d2(line.from, line.to), t.stations[i]!.values.element!, 1e-9, `station line ${line.n}`);
       expect(a.some((p) => p[0] === line.from[0] && p[1] === line.from[1])).toBe(true);
       expect(b.some((p) => p[0] === line.to[0] && p[1] === line.to[1])).toBe(true);
     }

@@ -50,7 +50,7 @@ const TWO_PI = 2 * Math.PI;
  *   `BAD_OPTION` for an unknown seam.
  * @example
  * const r = layoutEccentricCone({ largeDiameterMm: 219.1, smallDiameterMm: 114.3, lengthMm: 178, thicknessMm: 0 });
- * r.templates[0]?.stations[0]?.lengthsMm.element // 178: the flat side (seam on it)
+ * r.templates[0]?.stations[0]?.values.element // 178: the flat side (seam on it)
  */
 export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricConeOptions = {}): EccentricConeLayout {
   const cone = resolveCone(spec, options, 'eccentric');
@@ -112,18 +112,18 @@ export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricC
       const angleDeg = (g * 360) / N;
       const a = A[idx] as Vec3;
       const b = B[idx] as Vec3;
-      const lengthsMm: Record<string, number> = {
+      const values: Record<string, number> = {
         element: dist(a, b),
         largeGirth: largeAlong[idx] as number,
         smallGirth: smallAlong[idx] as number,
       };
       if (s > 0) {
         const prev = idx - m;
-        lengthsMm.diagonal = dist(A[prev] as Vec3, b);
-        lengthsMm.largeStep = dist(A[prev] as Vec3, a);
-        lengthsMm.smallStep = dist(B[prev] as Vec3, b);
+        values.diagonal = dist(A[prev] as Vec3, b);
+        values.largeStep = dist(A[prev] as Vec3, a);
+        values.smallStep = dist(B[prev] as Vec3, b);
       }
-      stations.push({ n: g + 1, angleDeg, lengthsMm });
+      stations.push({ n: g + 1, angleDeg, values });
       stationLines.push({ n: g + 1, angleDeg, from: large[idx] as Point2, to: small[idx] as Point2 });
     }
 
@@ -174,12 +174,12 @@ export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricC
       marks,
       labels,
       stationColumns: [
-        { key: 'element', heading: 'Element' },
-        { key: 'largeGirth', heading: 'Large girth' },
-        { key: 'smallGirth', heading: 'Small girth' },
-        { key: 'diagonal', heading: 'Diagonal' },
-        { key: 'largeStep', heading: 'Large step' },
-        { key: 'smallStep', heading: 'Small step' },
+        { key: 'element', heading: 'Element', quantity: 'length' },
+        { key: 'largeGirth', heading: 'Large girth', quantity: 'length' },
+        { key: 'smallGirth', heading: 'Small girth', quantity: 'length' },
+        { key: 'diagonal', heading: 'Diagonal', quantity: 'length' },
+        { key: 'largeStep', heading: 'Large step', quantity: 'length' },
+        { key: 'smallStep', heading: 'Small step', quantity: 'length' },
       ],
       stations,
     });

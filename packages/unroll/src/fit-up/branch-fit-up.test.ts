@@ -22,8 +22,8 @@ describe('branchFitUp', () => {
         const stations = 2 * half;
         const hole = layoutBranch(spec, { stations }).templates[1];
         const fit = branchFitUp(spec);
-        const heel = hole.stations[0]!.lengthsMm;
-        const toe = hole.stations[half]!.lengthsMm;
+        const heel = hole.stations[0]!.values;
+        const toe = hole.stations[half]!.values;
         expect(hole.stations[half]!.angleDeg).toBe(180);
         const R = spec.header.odMm / 2;
         expectClose([fit.hole.heel.axialMm, fit.hole.toe.axialMm], [heel.axial!, toe.axial!], 1e-9 * R, 'hole heel/toe axial, mm');

@@ -21,7 +21,7 @@ const DEG = Math.PI / 180;
 const NPS12 = { odMm: 12.75 * IN, wallMm: 0.375 * IN, label: 'NPS 12 STD' };
 const NPS6 = { odMm: 6.625 * IN, wallMm: 0.28 * IN, label: 'NPS 6 STD' };
 
-const col = (rows: Template['stations'], key: string): number[] => rows.map((s) => s.lengthsMm[key]!);
+const col = (rows: Template['stations'], key: string): number[] => rows.map((s) => s.values[key]!);
 
 /** Station by station, long-point and short-point readings of every cut column add up to `depthMm[key]` (within `tol` mm). */
 function expectReferencesAddUp(t: Template, depths: readonly CutDepth[], depthMm: Readonly<Record<string, number>>, tol: number): void {
@@ -52,9 +52,9 @@ describe('ordinatesFrom', () => {
     const short = ordinatesFrom(cut, 'short-point', fit.cutDepths);
     const long = ordinatesFrom(cut, 'long-point', fit.cutDepths);
     // Station 5 (90°) and 13 (270°) are the sides; station 1 (0°, heel) and 9 (180°, toe) the crown.
-    for (const n of [5, 13]) expectClose(short.stations[n - 1]!.lengthsMm.ordinate!, saddle, 1e-9 * R, `short-point ordinate at station ${n}, mm`);
-    for (const n of [1, 9]) expectClose(long.stations[n - 1]!.lengthsMm.cutback!, saddle, 1e-9 * R, `long-point cutback at station ${n}, mm`);
-    for (const n of [1, 9]) expectClose(short.stations[n - 1]!.lengthsMm.ordinate!, 0, 1e-9 * R, `short-point ordinate at the crown, station ${n}, mm`);
+    for (const n of [5, 13]) expectClose(short.stations[n - 1]!.values.ordinate!, saddle, 1e-9 * R, `short-point ordinate at station ${n}, mm`);
+    for (const n of [1, 9]) expectClose(long.stations[n - 1]!.values.cutback!, saddle, 1e-9 * R, `long-point cutback at station ${n}, mm`);
+    for (const n of [1, 9]) expectClose(short.stations[n - 1]!.values.ordinate!, 0, 1e-9 * R, `short-point ordinate at the crown, station ${n}, mm`);
     expectClose(short.columns[0]!.fullDepthMm, saddle, 1e-9 * R, 'full depth = saddle depth, mm');
     expectClose(short.columns[0]!.stockPastShortPointMm, saddle, 1e-9 * R, 'stock past the short point, mm');
     expect(short.columns[0]!.referenceWords).toBe('measured from the square line through the short point');

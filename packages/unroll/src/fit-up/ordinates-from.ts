@@ -70,7 +70,7 @@ const HEADINGS: Readonly<Record<OrdinateReference, Readonly<Record<string, strin
  * @throws GirthError `BAD_OPTION` (field `ordinatesFrom`) for an unknown reference;
  *   `BAD_OPTION` (field `depths`) when a depth names a column the template lacks,
  *   or a row lacks a value in it.
- * @example ordinatesFrom(layout.templates[0], 'short-point', fitUp.cutDepths).stations[0]?.lengthsMm.ordinate
+ * @example ordinatesFrom(layout.templates[0], 'short-point', fitUp.cutDepths).stations[0]?.values.ordinate
  */
 export function ordinatesFrom(template: Template, reference: OrdinateReference, depths: readonly CutDepth[]): ReferencedOrdinates {
   const ref = requireOrdinateReference(reference);
@@ -98,7 +98,7 @@ export function ordinatesFrom(template: Template, reference: OrdinateReference, 
   }
   const stationColumns = template.stationColumns.map((c): StationColumn => {
     const done = columns.find((o) => o.cutbackKey === c.key);
-    return done === undefined ? c : { key: done.key, heading: done.heading };
+    return done === undefined ? c : { key: done.key, heading: done.heading, quantity: 'length' };
   });
   const stations = template.stations.map((row) => {
     const values: Record<string, number> = {};

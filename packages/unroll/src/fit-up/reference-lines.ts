@@ -29,8 +29,9 @@ export interface ReferenceLines {
  * @example referenceLines(layout.templates[0], fitUp.cutDepths)[0]?.shortPointLine.from[1] // the full depth, mm
  */
 export function referenceLines(template: Template, depths: readonly CutDepth[]): readonly ReferenceLines[] {
-  const x0 = template.squareLine?.from[0] ?? 0;
-  const x1 = template.stretchOutMm ?? template.squareLine?.to[0] ?? 0;
+  if (template.kind !== 'wrap') return [];
+  const x0 = template.squareLine.from[0];
+  const x1 = template.stretchOutMm;
   const h = REFERENCE_LINE_LABEL_HEIGHT_MM;
   return depths
     .filter((d) => d.templateId === template.id && template.stationColumns.some((c) => c.key === d.columnKey))

@@ -4,7 +4,7 @@
  */
 import { GirthError } from '@girth/pipes';
 import { dot, type GeneratorBundle, type GeneratorHit, type HostSurface } from '@girth/geometry';
-import type { Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
+import type { Point2, StationLine, StationRow, TemplateLabel, WrapTemplate } from '../types.js';
 import { sampleCut } from '../wrap/sample-cut.js';
 import { WRAP_LABEL_HEIGHT_MM, type WrapLabel } from '../wrap/develop-wrap.js';
 import type { TemplateFacts } from '../facts.js';
@@ -59,9 +59,9 @@ export interface DevelopTwoCutWrapInput {
  *   frame with opposite axes; the errors of `sampleCut`.
  * @example
  * developTwoCutWrap({ near, far, wrapOdMm: 323.9, stations: 16, id: 'miter-middle',
- *   title: 'Miter middle piece', notes: [], labels: [] }).stations[0]?.lengthsMm.length
+ *   title: 'Miter middle piece', notes: [], labels: [] }).stations[0]?.values.length
  */
-export function developTwoCutWrap(input: DevelopTwoCutWrapInput): Template {
+export function developTwoCutWrap(input: DevelopTwoCutWrapInput): WrapTemplate {
   checkSharedFrame(input.near.bundle, input.far.bundle);
   const options = {
     stations: input.stations,
@@ -90,7 +90,7 @@ export function developTwoCutWrap(input: DevelopTwoCutWrapInput): Template {
     stations.push({
       n: i + 1,
       angleDeg,
-      lengthsMm: { girth, cutback: nearLongMm - a.axialMm, cutbackFar: farLongMm - b.axialMm, length: a.axialMm + b.axialMm },
+      values: { girth, cutback: nearLongMm - a.axialMm, cutbackFar: farLongMm - b.axialMm, length: a.axialMm + b.axialMm },
     });
     stationLines.push({ n: i + 1, angleDeg, from: [girth, 0], to: [girth, spanMm] });
   });
@@ -113,6 +113,8 @@ export function developTwoCutWrap(input: DevelopTwoCutWrapInput): Template {
       { kind: 'polyline', points: farPoints, closed: false },
     ],
     squareLine: { kind: 'segment', from: [0, 0], to: [stretchOutMm, 0] },
+    // Station 1 of a miter piece is on the throat (the side toward the bend centre).
+    startLine: 'throat',
     stationLines,
     marks: [
       { kind: 'segment', from: [0, spanMm], to: [stretchOutMm, spanMm] },
@@ -120,10 +122,10 @@ export function developTwoCutWrap(input: DevelopTwoCutWrapInput): Template {
     ],
     labels,
     stationColumns: [
-      { key: 'girth', heading: 'Girth' },
-      { key: 'cutback', heading: 'Cutback' },
-      { key: 'cutbackFar', heading: 'Cutback, far end' },
-      { key: 'length', heading: 'Length' },
+      { key: 'girth', heading: 'Girth', quantity: 'length' },
+      { key: 'cutback', heading: 'Cutback', quantity: 'length' },
+      { key: 'cutbackFar', heading: 'Cutback, far end', quantity: 'length' },
+      { key: 'length', heading: 'Length', quantity: 'length' },
     ],
     stations,
   };

@@ -138,6 +138,17 @@ describe('layoutMiter', () => {
     expectAllFinite(JSON.parse(JSON.stringify(layout)));
   });
 
+  it('puts station 1 of every piece on the throat, as its THROAT label says', () => {
+    // Station 1 is at phi = 0, the generator toward the bend centre: the throat (common practice).
+    const layout = layoutMiter({ pipe: NPS12_STD, bendDeg: 90, welds: 3, radiusMm: 457.2 });
+    for (const t of layout.templates) {
+      if (t.kind !== 'wrap') throw new Error(`${t.id} is a wrap`);
+      expect(t.startLine).toBe('throat');
+      const throat = t.labels.find((l) => l.text === 'THROAT');
+      expect(throat?.at[0]).toBe(0);
+    }
+  });
+
   it('makes one end template for a single miter', () => {
     const layout = layoutMiter({ pipe: NPS8_XS, bendDeg: 90, welds: 1, radiusMm: 300 });
     expect(layout.templates.map((t) => t.id)).toEqual(['miter-end']);
@@ -167,7 +178,8 @@ describe('layoutMiter', () => {
           const tol = 1e-9 * odMm * Math.max(1, tanC);
           const r = fitSurface === 'od' ? odMm / 2 : odMm / 2 - 0.06 * odMm;
           for (const t of layout.templates) {
-            expectClose(t.stretchOutMm ?? NaN, Math.PI * odMm, 1e-9 * odMm, `${t.id} stretch-out`);
+            if (t.kind !== 'wrap') throw new Error(`${t.id} is a wrap`);
+            expectClose(t.stretchOutMm, Math.PI * odMm, 1e-9 * odMm, `${t.id} stretch-out`);
             const polys = cutPolylines(t);
             polys.forEach((poly, k) => {
               expectClose([poly[0]?.[0] ?? NaN, poly[poly.length - 1]?.[0] ?? NaN], [0, Math.PI * odMm], 1e-9 * odMm, `${t.id} contour ${k} span`);

@@ -3,7 +3,7 @@
  */
 import { GirthError } from '@girth/pipes';
 import { hitGenerator, miterCutList, miterGeometry, type MiterCutEnd, type MiterSpec } from '@girth/geometry';
-import type { PipeUsed, Segment2, Template } from '../types.js';
+import type { PipeUsed, Segment2, Template, WrapTemplate } from '../types.js';
 import type { TemplateFacts } from '../facts.js';
 import { developWrap, WRAP_LABEL_HEIGHT_MM, type WrapLabel } from '../wrap/develop-wrap.js';
 import { resolveCutStations, type CutLayoutOptions } from '../plane-cut/layout-options.js';
@@ -107,19 +107,19 @@ function endTemplate(
   cut: MiterCutEnd,
   tangentMm: number,
   o: { wrapOdMm: number; stations: number; chordToleranceMm?: number; title: string; notes: readonly string[]; facts: TemplateFacts },
-): Template {
-  const t = developWrap({ bundle: cut.bundle, host: cut.host, id: 'miter-end', labels: PIECE_LABELS, ...o });
+): WrapTemplate {
+  const t = developWrap({ bundle: cut.bundle, host: cut.host, id: 'miter-end', labels: PIECE_LABELS, startLine: 'throat', ...o });
   // Axial position of the square line (the long point), from the piece's tangent point toward the cut.
   const heel = hitGenerator(cut.bundle, cut.host, 0);
-  const heelCutback = t.stations[0]?.lengthsMm.cutback;
+  const heelCutback = t.stations[0]?.values.cutback;
   if (heel === undefined || heelCutback === undefined) throw new GirthError('NO_INTERSECTION', 'stations', 'stations: the throat generator misses the weld plane');
   const squareEndY = heel.axialMm + heelCutback + tangentMm;
-  const squareEnd: Segment2 = { kind: 'segment', from: [0, squareEndY], to: [t.stretchOutMm ?? 0, squareEndY] };
+  const squareEnd: Segment2 = { kind: 'segment', from: [0, squareEndY], to: [t.stretchOutMm, squareEndY] };
   return {
     ...t,
     marks: [...t.marks, squareEnd],
-    labels: [...t.labels, { text: 'SQUARE END', at: [(t.stretchOutMm ?? 0) / 2, squareEndY - 1.5 * WRAP_LABEL_HEIGHT_MM], heightMm: WRAP_LABEL_HEIGHT_MM }],
-    stationColumns: [...t.stationColumns, { key: 'length', heading: 'Length' }],
-    stations: t.stations.map((row) => ({ ...row, lengthsMm: { ...row.lengthsMm, length: squareEndY - (row.lengthsMm.cutback ?? NaN) } })),
+    labels: [...t.labels, { text: 'SQUARE END', at: [(t.stretchOutMm) / 2, squareEndY - 1.5 * WRAP_LABEL_HEIGHT_MM], heightMm: WRAP_LABEL_HEIGHT_MM }],
+    stationColumns: [...t.stationColumns, { key: 'length', heading: 'Length', quantity: 'length' }],
+    stations: t.stations.map((row) => ({ ...row, values: { ...row.values, length: squareEndY - (row.values.cutback ?? NaN) } })),
   };
 }

@@ -53,7 +53,8 @@ describe('layoutPlaneCut', () => {
           const wallMm = odMm * 0.05;
           const layout = layoutPlaneCut({ pipe: { odMm, wallMm }, angleDeg, fitSurface }, { stations, chordToleranceMm });
           const [t] = layout.templates;
-          expectClose(t.stretchOutMm ?? NaN, Math.PI * odMm, 1e-9 * odMm, 'stretch-out = π × OD');
+          if (t.kind !== 'wrap') throw new Error('a plane cut is a wrap');
+          expectClose(t.stretchOutMm, Math.PI * odMm, 1e-9 * odMm, 'stretch-out = π × OD');
           const cb = column(t, 'cutback');
           expect(Math.min(...cb)).toBeGreaterThanOrEqual(-1e-9 * odMm);
           const [poly] = cutPolylines(t);
@@ -78,7 +79,8 @@ describe('layoutPlaneCut', () => {
     const layout = layoutPlaneCut({ pipe: NPS6_STD, angleDeg: 50, fitSurface: 'id' });
     const [t] = layout.templates;
     const d = NPS6_STD.odMm - 2 * NPS6_STD.wallMm;
-    expectClose(t.wrapOdMm ?? NaN, NPS6_STD.odMm, 0, 'wraps on the OD');
+    if (t.kind !== 'wrap') throw new Error('a plane cut is a wrap');
+    expectClose(t.wrapOdMm, NPS6_STD.odMm, 0, 'wraps on the OD');
     expectClose(column(t, 'cutback'), stationPhis(16).map((phi) => (d / 2) * Math.tan(rad(40)) * (1 + Math.cos(phi))), 1e-9 * d, 'ID ordinates');
     expect(t.notes.some((n) => n.includes('crosses the bore'))).toBe(true);
   });

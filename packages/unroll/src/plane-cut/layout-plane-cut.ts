@@ -25,7 +25,7 @@ import type { PlaneCutLayout } from './types.js';
  *   for bad sizes, gap, fit surface or chord tolerance.
  * @example
  * const cut = layoutPlaneCut({ pipe: { odMm: 168.3, wallMm: 7.11, label: 'NPS 6 STD' }, angleDeg: 60 });
- * cut.templates[0].stations[0]?.lengthsMm.cutback // the heel: OD × tan 30°
+ * cut.templates[0].stations[0]?.values.cutback // the heel: OD × tan 30°
  */
 export function layoutPlaneCut(spec: PlaneCutSpec, options: CutLayoutOptions = {}): PlaneCutLayout {
   const g = planeCutGeometry(spec);
@@ -43,7 +43,7 @@ export function layoutPlaneCut(spec: PlaneCutSpec, options: CutLayoutOptions = {
   });
   // The template's square line is at the long point: axial + cutback, the same at every station.
   const heel = hitGenerator(g.bundle, g.host, 0);
-  const heelCutback = draft.stations[0]?.lengthsMm.cutback;
+  const heelCutback = draft.stations[0]?.values.cutback;
   const axisHit = hitGenerator({ ...g.bundle, radius: 0 }, g.host, 0);
   if (heel === undefined || axisHit === undefined || heelCutback === undefined) {
     throw new GirthError('NO_INTERSECTION', 'angleDeg', 'angleDeg: the pipe does not meet the plane');

@@ -19,12 +19,12 @@ describe('developWrap', () => {
     expect(t.id).toBe('test-cut');
     expectClose(t.stretchOutMm!, Math.PI * od, 1e-12, 'stretch-out');
     expectClose(
-      t.stations.map((s) => s.lengthsMm.cutback!),
+      t.stations.map((s) => s.values.cutback!),
       t.stations.map((s) => h(Math.PI / 2) - h((s.angleDeg * Math.PI) / 180)),
       1e-9,
       'cutback mm',
     );
-    expectClose(t.stations.map((s) => s.lengthsMm.girth!), t.stations.map((_, i) => (Math.PI * od * i) / 16), 1e-9, 'girth mm');
+    expectClose(t.stations.map((s) => s.values.girth!), t.stations.map((_, i) => (Math.PI * od * i) / 16), 1e-9, 'girth mm');
     expect(t.stations.map((s) => s.angleDeg)).toEqual(Array.from({ length: 16 }, (_, i) => 22.5 * i));
     expect(t.stationColumns.map((c) => c.key)).toEqual(['girth', 'cutback']);
   });
@@ -34,7 +34,7 @@ describe('developWrap', () => {
     const D = 323.85;
     const t = developWrap({ ...base, bundle: pipeAlongZ(D / 2), host: tiltedPlane(11.25), wrapOdMm: D, stations: 32 });
     expectClose(
-      t.stations.map((s) => s.lengthsMm.cutback!),
+      t.stations.map((s) => s.values.cutback!),
       t.stations.map((s) => (D / 2) * Math.tan((11.25 * Math.PI) / 180) * (1 - Math.cos((s.angleDeg * Math.PI) / 180))),
       1e-9,
       'ordinate mm',
@@ -63,13 +63,13 @@ describe('developWrap', () => {
           for (const p of pts) expect(p[1]).toBeGreaterThanOrEqual(0);
           // The long point is the true maximum of the closed form: no point of the exact curve lies above the square line.
           const tMax = Math.max(...Array.from({ length: 4001 }, (_, k) => branchAxialClosedForm(R, r, angleDeg, e, (2 * Math.PI * k) / 4000)));
-          const first = t.stations[0]!.lengthsMm.cutback!;
+          const first = t.stations[0]!.values.cutback!;
           const longAxial = first + branchAxialClosedForm(R, r, angleDeg, e, 0);
           expect(longAxial).toBeGreaterThanOrEqual(tMax - 1e-9);
           expect(t.stationLines).toHaveLength(stations);
           t.stationLines.forEach((l, i) => {
-            expect(l.from).toEqual([t.stations[i]!.lengthsMm.girth, 0]);
-            expect(l.to).toEqual([t.stations[i]!.lengthsMm.girth, t.stations[i]!.lengthsMm.cutback]);
+            expect(l.from).toEqual([t.stations[i]!.values.girth, 0]);
+            expect(l.to).toEqual([t.stations[i]!.values.girth, t.stations[i]!.values.cutback]);
           });
           expect(t.labels.map((l) => l.text)).toEqual(stations % 2 === 0 ? ['HEEL', 'TOE'] : ['HEEL']);
         },
@@ -92,7 +92,7 @@ describe('developWrap', () => {
     const l = t.labels[0]!;
     expect(l.text).toBe('SIDE');
     expectClose(l.at[0], (Math.PI * 110) / 4, 1e-9, 'label girth');
-    expect(l.at[1]).toBeGreaterThan(t.stations[2]!.lengthsMm.cutback!);
+    expect(l.at[1]).toBeGreaterThan(t.stations[2]!.values.cutback!);
   });
 
   it('rejects a label angle off the girth', () => {

@@ -4,7 +4,7 @@
  */
 import type { GeneratorBundle, HostSurface } from '@girth/geometry';
 import { GirthError } from '@girth/pipes';
-import type { Point2, StationLine, StationRow, Template, TemplateLabel } from '../types.js';
+import type { Point2, StationLine, StationRow, TemplateLabel, WrapTemplate } from '../types.js';
 import { sampleCut } from './sample-cut.js';
 import type { TemplateFacts } from '../facts.js';
 
@@ -42,6 +42,8 @@ export interface DevelopWrapInput {
   readonly facts?: TemplateFacts;
   /** Labels to place; default HEEL at station 1 and, when N is even, TOE at 180°. */
   readonly labels?: readonly WrapLabel[];
+  /** The line on the pipe station 1 goes on, lower case (see `WrapTemplate.startLine`); default `heel`. */
+  readonly startLine?: string;
 }
 
 /**
@@ -61,9 +63,9 @@ export interface DevelopWrapInput {
  * @example
  * const t = developWrap({ bundle, host, wrapOdMm: 168.3, stations: 16,
  *   id: 'branch-cut', title: 'Branch cut', notes: [] });
- * t.stations[0]?.lengthsMm.cutback // cutback at the heel, mm
+ * t.stations[0]?.values.cutback // cutback at the heel, mm
  */
-export function developWrap(input: DevelopWrapInput): Template {
+export function developWrap(input: DevelopWrapInput): WrapTemplate {
   const cut = sampleCut(input.bundle, input.host, {
     stations: input.stations,
     wrapOdMm: input.wrapOdMm,
@@ -84,7 +86,7 @@ export function developWrap(input: DevelopWrapInput): Template {
     const angleDeg = (360 * i) / n;
     const girth = girthAt(s.phiRad);
     const cutback = longAxialMm - s.axialMm;
-    stations.push({ n: i + 1, angleDeg, lengthsMm: { girth, cutback } });
+    stations.push({ n: i + 1, angleDeg, values: { girth, cutback } });
     stationLines.push({ n: i + 1, angleDeg, from: [girth, 0], to: [girth, cutback] });
   });
 
@@ -107,12 +109,13 @@ export function developWrap(input: DevelopWrapInput): Template {
     wrapOdMm: input.wrapOdMm,
     cut: [{ kind: 'polyline', points, closed: false }],
     squareLine: { kind: 'segment', from: [0, 0], to: [stretchOutMm, 0] },
+    startLine: input.startLine ?? 'heel',
     stationLines,
     marks: [],
     labels,
     stationColumns: [
-      { key: 'girth', heading: 'Girth' },
-      { key: 'cutback', heading: 'Cutback' },
+      { key: 'girth', heading: 'Girth', quantity: 'length' },
+      { key: 'cutback', heading: 'Cutback', quantity: 'length' },
     ],
     stations,
   };

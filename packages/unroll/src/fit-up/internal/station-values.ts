@@ -1,21 +1,20 @@
 /**
  * The one place the fit-up code reads and writes the values of a station row.
- * Rows keep their lengths in `lengthsMm` today; when rows move to a `values`
- * record, only this file changes.
+ * Rows keep their values (lengths in mm) in `values`.
  */
 import type { StationRow } from '../../types.js';
 
 /** The row's value in column `key` (mm for length columns), or undefined where the row leaves it out. */
 export function stationValue(row: StationRow, key: string): number | undefined {
-  return row.lengthsMm[key];
+  return row.values[key];
 }
 
 /** All values of a row, keyed by column. */
 export function stationValues(row: StationRow): Readonly<Record<string, number>> {
-  return row.lengthsMm;
+  return row.values;
 }
 
 /** The same row with its values replaced. */
 export function withStationValues(row: StationRow, values: Readonly<Record<string, number>>): StationRow {
-  return { ...row, lengthsMm: values };
+  return { ...row, values };
 }

@@ -7,7 +7,7 @@ import type { PathPart, Point2, Template } from '../../types.js';
 /** A template's station table column as numbers, in station order. */
 export function column(t: Template, key: string): number[] {
   return t.stations.map((s) => {
-    const v = s.lengthsMm[key];
+    const v = s.values[key];
     if (v === undefined) throw new Error(`${t.id}: no column ${key} at station ${s.n}`);
     return v;
   });

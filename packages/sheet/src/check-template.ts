@@ -1,6 +1,7 @@
 /**
- * Checking a template before it is drawn: every number finite and within
- * reach, arcs with a radius and a sweep, wraps with their stretch-out.
+ * Checking a template before its sheet is planned: every number finite and
+ * within reach, arcs with a radius and a sweep, wraps with their stretch-out,
+ * holes with the OD they lie on. Done once, in `planSheet`, for every writer.
  */
 import { GirthError, requireFinite, requireInRange, requirePositive } from '@girth/pipes';
 import type { PathPart, Point2, Template } from '@girth/unroll';
@@ -36,7 +37,11 @@ function checkPart(part: PathPart, field: string): void {
       if (!Array.isArray(part.points) || part.points.length < 2) {
         throw new GirthError('EMPTY_INPUT', `${field}.points`, `${field}.points: a polyline needs at least 2 points`, part.points);
       }
-      part.points.forEach((p, i) => checkPoint(p, `${field}.points[${i}]`));
+      part.points.forEach((p, i) => {
+        // The usual case is checked without making the field path (made only for an error).
+        if (Array.isArray(p) && p.length === 2 && Math.abs(p[0]) <= MAX_COORD_MM && Math.abs(p[1]) <= MAX_COORD_MM) return;
+        checkPoint(p, `${field}.points[${i}]`);
+      });
       return;
     }
     case 'segment':
@@ -74,7 +79,8 @@ function checkPart(part: PathPart, field: string): void {
  *   `NOT_A_NUMBER` / `NOT_FINITE` for a coordinate that is NaN or infinite; `OUT_OF_RANGE` for a
  *   coordinate beyond ±1 000 000 mm, an arc sweeping 0° or a label taller than 200 mm; `NEGATIVE`
  *   for a radius or label height of 0 or less; `EMPTY_INPUT` for a template with nothing to cut,
- *   or a wrap without `stretchOutMm` / `wrapOdMm`; `BAD_JOB` for a malformed point or part.
+ *   a wrap without `stretchOutMm` / `wrapOdMm` / `squareLine` / `startLine` or a hole without
+ *   `wrapOdMm`; `BAD_JOB` for a malformed point or part.
  * @example
  * ```ts
  * checkTemplate(template); // returns nothing, or throws
@@ -82,12 +88,22 @@ function checkPart(part: PathPart, field: string): void {
  */
 export function checkTemplate(template: Template): void {
   const t = 'template';
+  if (template === null || typeof template !== 'object') {
+    throw new GirthError('BAD_JOB', t, `${t}: expected a template object, got ${String(template)}`, template);
+  }
+  if (template.kind !== 'wrap' && template.kind !== 'hole' && template.kind !== 'flat') {
+    const kind: unknown = (template as { kind?: unknown }).kind;
+    throw new GirthError('BAD_JOB', `${t}.kind`, `${t}.kind: expected wrap, hole or flat, got ${String(kind)}`, kind);
+  }
   if (!Array.isArray(template.cut) || template.cut.length === 0) {
     throw new GirthError('EMPTY_INPUT', `${t}.cut`, `${t}.cut: a template needs at least one cut line`);
   }
+  for (const key of ['marks', 'stationLines', 'labels', 'notes'] as const) {
+    if (!Array.isArray(template[key])) throw new GirthError('BAD_JOB', `${t}.${key}`, `${t}.${key}: expected a list`, template[key]);
+  }
   template.cut.forEach((p, i) => checkPart(p, `${t}.cut[${i}]`));
   template.marks.forEach((p, i) => checkPart(p, `${t}.marks[${i}]`));
-  if (template.squareLine) checkPart(template.squareLine, `${t}.squareLine`);
+  if (template.kind === 'wrap' && template.squareLine !== undefined) checkPart(template.squareLine, `${t}.squareLine`);
   template.stationLines.forEach((s, i) => {
     checkPoint(s.from, `${t}.stationLines[${i}].from`);
     checkPoint(s.to, `${t}.stationLines[${i}].to`);
@@ -98,13 +114,23 @@ export function checkTemplate(template: Template): void {
     requirePositive(l.heightMm, `${t}.labels[${i}].heightMm`);
     requireInRange(l.heightMm, `${t}.labels[${i}].heightMm`, 0, MAX_LABEL_HEIGHT_MM, { unit: 'mm', minOpen: true });
   });
+  // What each kind needs besides its lines (the types require them; data from JSON may lack them).
+  const ods: readonly ('stretchOutMm' | 'wrapOdMm')[] =
+    template.kind === 'wrap' ? ['stretchOutMm', 'wrapOdMm'] : template.kind === 'hole' ? ['wrapOdMm'] : [];
+  for (const key of ods) {
+    const value = (template as unknown as Record<string, number | undefined>)[key];
+    if (value === undefined) {
+      throw new GirthError('EMPTY_INPUT', `${t}.${key}`, `${t}.${key}: a ${template.kind} template needs its ${key}`);
+    }
+    requirePositive(value, `${t}.${key}`);
+    requireInRange(value, `${t}.${key}`, 0, MAX_COORD_MM, { unit: 'mm', minOpen: true });
+  }
   if (template.kind === 'wrap') {
-    for (const key of ['stretchOutMm', 'wrapOdMm'] as const) {
-      if (template[key] === undefined) {
-        throw new GirthError('EMPTY_INPUT', `${t}.${key}`, `${t}.${key}: a wrap template needs its ${key}`);
-      }
-      requirePositive(template[key], `${t}.${key}`);
-      requireInRange(template[key], `${t}.${key}`, 0, MAX_COORD_MM, { unit: 'mm', minOpen: true });
+    if (template.squareLine === undefined) {
+      throw new GirthError('EMPTY_INPUT', `${t}.squareLine`, `${t}.squareLine: a wrap template needs its square line`);
+    }
+    if (typeof template.startLine !== 'string' || template.startLine.trim() === '') {
+      throw new GirthError('EMPTY_INPUT', `${t}.startLine`, `${t}.startLine: a wrap template names the line station 1 goes on`);
     }
   }
 }

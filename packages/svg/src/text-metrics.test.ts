@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
-import { textWidthMm } from './text-metrics.js';
+import { textWidthMm } from '@girth/sheet';
 import { CAUTION } from '@girth/unroll';
-import { resvgOf } from '../test-support/render.js';
+import { resvgOf } from './test-support/render.js';
 
 /** Width of a line as resvg sets it in DejaVu Sans (the widest font the sheet names), mm. */
 function realWidthMm(text: string, fontMm: number, bold: boolean): number {

@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
-import { hatchLines } from './overlap-group.js';
+import { hatchLines } from './hatch.js';
 
 describe('hatchLines', () => {
   test('every hatch line is a 45° segment with both ends on the rectangle (clipped exactly)', () => {

@@ -5,7 +5,7 @@
 import type { TemplateLabel } from '@girth/unroll';
 import { CAP_HEIGHT_EM } from '../style.js';
 import { centredText, type CentredText } from '../internal/text-box.js';
-import { textLines } from '../internal/safe-text.js';
+import { textLines } from '../internal/text-lines.js';
 
 /**
  * Placements of the template's labels, template mm.

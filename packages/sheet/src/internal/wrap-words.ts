@@ -1,6 +1,6 @@
 /**
- * Breaks a long line of text into lines of at most `maxChars` at spaces, so a
- * long note becomes several TEXT entities instead of being cut off.
+ * Breaks a long line of text into lines of at most `maxChars` at spaces, so a long
+ * title or note becomes several lines on the sheet instead of one too wide (or cut off in a DXF).
  */
 
 /**

@@ -1,0 +1,10 @@
+export * from './types.js';
+export * from './options.js';
+export * from './check-template.js';
+export * from './check-plan.js';
+export * from './print-note.js';
+export * from './style.js';
+export { planSheet } from './plan-sheet.js';
+export { arcBox, partBox, pointsBox, unionBox, growBox, EMPTY_BOX } from './internal/box.js';
+export { textWidthMm } from './internal/text-metrics.js';
+export { textLines } from './internal/text-lines.js';

@@ -1,0 +1,148 @@
+import { describe, expect, test } from 'vitest';
+import fc from 'fast-check';
+import { girthErrorOf } from '@girth/pipes/test-support';
+import type { HoleTemplate, StationLine, WrapTemplate } from '@girth/unroll';
+import { planSheet } from './plan-sheet.js';
+import { FONT_MM } from './style.js';
+import type { Box, SheetText } from './types.js';
+
+const DEG = Math.PI / 180;
+
+/**
+ * A plane cut-back wrap on `odMm` at `cutDeg`: ordinate (D/2) tan(c) (1 − cos phi)
+ * (REFERENCES.md, miter), station lines from the square line (y = 0) to the cut.
+ */
+function wrap(odMm = 168.275, cutDeg = 30, stations = 16, startLine = 'heel'): WrapTemplate {
+  const r = odMm / 2;
+  const ord = (phi: number) => r * Math.tan(cutDeg * DEG) * (1 - Math.cos(phi));
+  const points = Array.from({ length: 129 }, (_, i) => {
+    const phi = (2 * Math.PI * i) / 128;
+    return [r * phi, ord(phi)] as const;
+  });
+  const stationLines: StationLine[] = Array.from({ length: stations }, (_, k) => {
+    const phi = (2 * Math.PI * k) / stations;
+    return { n: k + 1, angleDeg: (360 * k) / stations, from: [r * phi, 0], to: [r * phi, ord(phi)] };
+  });
+  return {
+    id: 'plane-cut',
+    kind: 'wrap',
+    title: 'Plane cut',
+    notes: ['A note'],
+    stretchOutMm: Math.PI * odMm,
+    wrapOdMm: odMm,
+    startLine,
+    cut: [{ kind: 'polyline', points, closed: false }],
+    squareLine: { kind: 'segment', from: [0, 0], to: [Math.PI * odMm, 0] },
+    stationLines,
+    marks: [],
+    labels: [{ text: 'HEEL', at: [0, -10], heightMm: 4 }],
+    stationColumns: [],
+    stations: [],
+  };
+}
+
+/** A hole whose stations k and 8 − k share a girth (x = R asin(r sin phi / R), as on a tee). */
+function hole(): HoleTemplate {
+  const R = 161.925;
+  const r = 76.2;
+  const at = (phi: number) => [R * Math.asin((r * Math.sin(phi)) / R), r * Math.cos(phi)] as const;
+  return {
+    id: 'header-hole',
+    kind: 'hole',
+    title: 'Hole',
+    notes: [],
+    wrapOdMm: 2 * R,
+    cut: [{ kind: 'polyline', points: Array.from({ length: 64 }, (_, i) => at((2 * Math.PI * i) / 64)), closed: true }],
+    stationLines: Array.from({ length: 16 }, (_, k) => {
+      const p = at((2 * Math.PI * k) / 16);
+      return { n: k + 1, angleDeg: 22.5 * k, from: [p[0], 0], to: p };
+    }),
+    marks: [],
+    labels: [],
+    stationColumns: [],
+    stations: [],
+  };
+}
+
+const texts = (items: ReturnType<typeof planSheet>['items'], role: SheetText['role']) =>
+  items.filter((i): i is SheetText => i.kind === 'text' && i.role === role);
+
+/** An item's box as it is drawn: a text turned 90° about its pivot has its box turned with it. */
+function turned(i: Exclude<ReturnType<typeof planSheet>['items'][number], { kind: 'path' }>): Box {
+  if (i.kind !== 'text' || i.rotateDeg === 0) return i.box;
+  const [px, py] = i.pivot;
+  // (x, y) -> (px - (y - py), py + (x - px)) turns counter-clockwise by 90°.
+  return { minX: px - (i.box.maxY - py), maxX: px - (i.box.minY - py), minY: py + (i.box.minX - px), maxY: py + (i.box.maxX - px) };
+}
+
+function inside(b: Box, page: { left: number; top: number; widthMm: number; heightMm: number }): boolean {
+  const eps = 1e-9;
+  return b.minX >= page.left - eps && b.maxX <= page.left + page.widthMm + eps && b.maxY <= page.top + eps && b.minY >= page.top - page.heightMm - eps;
+}
+
+describe('planSheet', () => {
+  test('every text box and rectangle lies on the page, inside the margin (invariant)', () => {
+    for (const t of [wrap(), hole()]) {
+      const plan = planSheet(t, { marginMm: 10 });
+      const inner = { left: plan.page.left + 10, top: plan.page.top - 10, widthMm: plan.page.widthMm - 20, heightMm: plan.page.heightMm - 20 };
+      for (const i of plan.items) if (i.kind !== 'path') expect(inside(turned(i), inner), `${t.id} ${i.role}`).toBe(true);
+    }
+  });
+
+  test('one station number per station on a wrap, just past the square-line end (below y = 0)', () => {
+    const plan = planSheet(wrap());
+    const numbers = texts(plan.items, 'station-number');
+    expect(numbers.map((n) => n.lines[0])).toEqual(Array.from({ length: 16 }, (_, i) => String(i + 1)));
+    for (const n of numbers) expect(n.box.maxY).toBeLessThan(0);
+  });
+
+  test('stations sharing a start point share one number, e.g. 2/8 on a tee hole (sin phi = sin(180° − phi))', () => {
+    const numbers = texts(planSheet(hole()).items, 'station-number').map((n) => n.lines[0]);
+    expect(numbers).toContain('2/8');
+    expect(numbers).toContain('1/9');
+    expect(numbers).toContain('10/16');
+  });
+
+  test('grouping and sizing agree with comparing every pair (brute force) on random start points', () => {
+    fc.assert(
+      fc.property(fc.array(fc.tuple(fc.integer({ min: -40, max: 40 }), fc.integer({ min: -5, max: 5 })), { minLength: 1, maxLength: 60 }), (pts) => {
+        // Points on a 0.5 mm grid: distinct ones are at least 0.5 mm apart, equal ones share a number.
+        const lines: StationLine[] = pts.map(([x, y], i) => ({ n: i + 1, angleDeg: 0, from: [x / 2, y / 2], to: [x / 2, y / 2 + 10] }));
+        const t: WrapTemplate = { ...wrap(), stationLines: lines };
+        const numbers = texts(planSheet(t).items, 'station-number');
+        const keys = new Map<string, number[]>();
+        lines.forEach((l) => keys.set(l.from.join(','), [...(keys.get(l.from.join(',')) ?? []), l.n]));
+        expect(numbers.map((n) => n.stations)).toEqual([...keys.values()]);
+        let minGap = Infinity;
+        const starts = [...keys.keys()].map((k) => k.split(',').map(Number));
+        for (let i = 0; i < starts.length; i++)
+          for (let j = i + 1; j < starts.length; j++) minGap = Math.min(minGap, Math.hypot(starts[i]![0]! - starts[j]![0]!, starts[i]![1]! - starts[j]![1]!));
+        const widestEm = Math.max(1, ...[...keys.values()].map((ns) => ns.join('/').length * 0.7 + (ns.length - 1) * -0.25));
+        expect(numbers[0]!.fontMm).toBeLessThanOrEqual(FONT_MM.stationNumber);
+        if (Number.isFinite(minGap)) expect(numbers[0]!.fontMm).toBeLessThanOrEqual(Math.max(1.2, (0.8 * minGap) / widestEm) + 1e-9);
+      }),
+      { numRuns: 100 },
+    );
+  });
+
+  test('the placement line says what each kind goes on: a miter wrap from the throat line, a hole on its OD', () => {
+    const line = (t: WrapTemplate | HoleTemplate) => texts(planSheet(t).items, 'title-placement').map((x) => x.lines[0]).join(' ');
+    expect(line(wrap(323.85, 22.5, 16, 'throat'))).toContain('edge x = 0 on the throat line (station 1)');
+    expect(line(hole())).toBe('Lay on the 323.85 mm OD of the pipe it is marked on.');
+  });
+
+  test('textScale scales the title block, not the drawing', () => {
+    const a = planSheet(wrap());
+    const b = planSheet(wrap(), { textScale: 2 });
+    expect(texts(b.items, 'title-title')[0]!.fontMm).toBeCloseTo(2 * texts(a.items, 'title-title')[0]!.fontMm, 12);
+    expect(texts(b.items, 'station-number')[0]!.fontMm).toBe(texts(a.items, 'station-number')[0]!.fontMm);
+  });
+
+  test('stationNumbers: false plans none; a wrap without its start line is refused', () => {
+    expect(texts(planSheet(wrap(), { stationNumbers: false }).items, 'station-number')).toEqual([]);
+    const { startLine: _s, ...rest } = wrap();
+    const e = girthErrorOf(() => planSheet(rest as WrapTemplate));
+    expect(e.code).toBe('EMPTY_INPUT');
+    expect(e.field).toBe('template.startLine');
+  });
+});

@@ -1,0 +1,194 @@
+/**
+ * Planning the sheet of a template once: where every line, station number,
+ * label, title line and mark goes, in mm, on which layer. The SVG and DXF
+ * writers only write this plan out.
+ */
+import { CAUTION, type Point2, type Template } from '@girth/unroll';
+import type { Box, ResolvedSheetOptions, SheetItem, SheetOptions, SheetPlan, SheetText, SheetTextRole } from './types.js';
+import { resolveSheetOptions } from './options.js';
+import { checkTemplate } from './check-template.js';
+import { checkPlan } from './check-plan.js';
+import { ASCENT_EM, CAP_HEIGHT_EM, DESCENT_EM, HATCH_SPACING_MM, LINE_EM, MAX_STROKE_MM, TEXT_INSET_EM, TITLE_GAP_MM } from './style.js';
+import { EMPTY_BOX, growBox, partBox, pointsBox, unionBox } from './internal/box.js';
+import type { CentredText } from './internal/text-box.js';
+import { textWidthMm } from './internal/text-metrics.js';
+import { planStationNumbers } from './plan/station-numbers.js';
+import { planLabels } from './plan/labels.js';
+import { planOverlap, type OverlapPlan } from './plan/overlap.js';
+import { hatchLines } from './plan/hatch.js';
+import { planTitleLines } from './plan/title-lines.js';
+import { planTitleBlock, RULE_MM } from './plan/title-block.js';
+
+/** Box of the lines of a template (cut, square line, stations, marks), template mm. */
+function geometryBox(template: Template): Box {
+  let box = EMPTY_BOX;
+  for (const part of template.cut) box = unionBox(box, partBox(part));
+  for (const part of template.marks) box = unionBox(box, partBox(part));
+  if (template.kind === 'wrap') box = unionBox(box, partBox(template.squareLine));
+  for (const s of template.stationLines) box = unionBox(box, pointsBox([s.from, s.to]));
+  return box;
+}
+
+function centred(t: CentredText, role: SheetTextRole, bold: boolean, extra: Partial<SheetText> = {}): SheetText {
+  return {
+    kind: 'text',
+    role,
+    layer: 'text',
+    lines: t.lines,
+    at: t.baseline,
+    anchor: 'middle',
+    fontMm: t.fontMm,
+    capHeightMm: CAP_HEIGHT_EM * t.fontMm,
+    lineMm: LINE_EM * t.fontMm,
+    bold,
+    rotateDeg: 0,
+    pivot: t.baseline,
+    box: t.box,
+    ...extra,
+  };
+}
+
+/** Text of one line starting at `x`, its baseline at `y` (template mm). */
+function leftText(text: string, x: number, y: number, fontMm: number, bold: boolean, role: SheetTextRole, layer: SheetText['layer']): SheetText {
+  const at: Point2 = [x, y];
+  return {
+    kind: 'text',
+    role,
+    layer,
+    lines: [text],
+    at,
+    anchor: 'start',
+    fontMm,
+    capHeightMm: CAP_HEIGHT_EM * fontMm,
+    lineMm: LINE_EM * fontMm,
+    bold,
+    rotateDeg: 0,
+    pivot: at,
+    box: { minX: x, maxX: x + textWidthMm(text, fontMm, bold), minY: y - DESCENT_EM * fontMm, maxY: y + ASCENT_EM * fontMm },
+  };
+}
+
+/** The tab's hatching: lines laid out down the page from its top left corner, turned into template mm. */
+function hatchItems(tab: Box): SheetItem[] {
+  const at = (p: Point2): Point2 => [tab.minX + p[0], tab.maxY - p[1]];
+  return hatchLines(0, 0, tab.maxX - tab.minX, tab.maxY - tab.minY, HATCH_SPACING_MM).map(([a, b]) => ({
+    kind: 'path',
+    role: 'overlap-hatch',
+    layer: 'paper',
+    part: { kind: 'segment', from: at(a), to: at(b) },
+  }));
+}
+
+function overlapItems(o: OverlapPlan): SheetItem[] {
+  const tab = o.tab;
+  const pivot: Point2 = [(tab.minX + tab.maxX) / 2, (tab.minY + tab.maxY) / 2];
+  return [
+    ...hatchItems(tab),
+    { kind: 'rect', role: 'overlap-tab', layer: 'paper', box: tab, filled: false },
+    { kind: 'path', role: 'overlap-align', layer: 'paper', part: { kind: 'segment', from: [tab.minX, tab.maxY], to: [tab.minX, tab.minY] } },
+    { ...centred(o.text, 'overlap', false, o.text.vertical ? { rotateDeg: 90, pivot } : {}), layer: 'paper' },
+  ];
+}
+
+function titleItems(template: Template, opts: ResolvedSheetOptions, drawing: Box): { items: SheetItem[]; widthMm: number; heightMm: number } {
+  const title = planTitleBlock(planTitleLines(template, opts), opts.sheetUnits, opts.textScale);
+  const left = drawing.minX;
+  const top = drawing.minY - TITLE_GAP_MM;
+  const contentW = Math.max(drawing.maxX - drawing.minX, title.widthMm);
+  const items: SheetItem[] = [
+    // Inset by half its weight so even a renderer that pads every stroke on all sides stays inside.
+    { kind: 'path', role: 'title-rule', layer: 'paper', part: { kind: 'segment', from: [left + RULE_MM / 2, top], to: [left + contentW - RULE_MM / 2, top] } },
+    ...title.lines.map((l) =>
+      leftText(l.text, left + TEXT_INSET_EM * l.fontMm, top - l.baselineMm, l.fontMm, l.bold, `title-${l.role}`, 'text'),
+    ),
+    leftText(title.caution.text, left + TEXT_INSET_EM * title.caution.fontMm, top - title.caution.baselineMm, title.caution.fontMm, true, 'caution', 'text'),
+    {
+      kind: 'rect',
+      role: 'calibration-bar',
+      layer: 'paper',
+      box: { minX: left, maxX: left + title.bar.lengthMm, maxY: top - title.bar.topMm, minY: top - title.bar.topMm - title.bar.heightMm },
+      filled: true,
+    },
+    leftText(title.barCaption.text, left + title.barCaption.xMm, top - title.barCaption.baselineMm, title.barCaption.fontMm, false, 'calibration-caption', 'paper'),
+  ];
+  return { items, widthMm: contentW, heightMm: title.heightMm };
+}
+
+/**
+ * Plans the sheet of a template: every line, station number, label, title line,
+ * glue tab and calibration mark, once, in template mm (y up), each with its role
+ * and layer. Checks the options and the template first, and the plan last, so
+ * writers need check nothing.
+ *
+ * Layout: the drawing (lines grown by half the widest stroke, station numbers,
+ * labels, the glue tab of a wrap) with `marginMm` of paper around it; the title
+ * block `TITLE_GAP_MM` under it, flush left with it. Station numbers sit just
+ * past the `from` end of each station line (the square line end of a wrap, the
+ * girth line end of a hole), along the line.
+ *
+ * @param template - the template (mm, y-up) from `@girth/unroll`.
+ * @param options - sheet units ('mm' | 'in'), margin (mm, 0–100, default 10), glue tab
+ *   (mm, 0–200, default 25; wraps only), job and piece (text, ≤ 200 characters), title
+ *   text scale (0.01–50, default 1), station numbers on or off (default on).
+ * @returns the plan: plain readonly data.
+ * @throws GirthError for bad options (see `resolveSheetOptions`) and for a template that
+ *   cannot be drawn (see `checkTemplate`: e.g. `NOT_A_NUMBER` on `template.cut[0].points[14][1]`).
+ * @example
+ * ```ts
+ * const plan = planSheet(template, { job: 'J-2291', piece: 'Spool 14 / B' });
+ * plan.items.filter((i) => i.role === 'station-number').length; // one per station start point
+ * ```
+ */
+export function planSheet(template: Template, options?: SheetOptions): SheetPlan {
+  const opts = resolveSheetOptions(options);
+  checkTemplate(template);
+
+  const geometry = geometryBox(template);
+  const numbers = opts.stationNumbers ? planStationNumbers(template.stationLines) : [];
+  const labels = planLabels(template.labels);
+  const overlap = template.kind === 'wrap' && opts.overlapMm > 0 ? planOverlap(geometry, template.stretchOutMm, opts.overlapMm) : undefined;
+  let drawing = growBox(geometry, MAX_STROKE_MM / 2);
+  for (const t of numbers) drawing = unionBox(drawing, t.box);
+  for (const t of labels) drawing = unionBox(drawing, t.box);
+  if (overlap) drawing = unionBox(drawing, growBox(overlap.box, MAX_STROKE_MM / 2));
+
+  const title = titleItems(template, opts, drawing);
+  const m = opts.marginMm;
+  const items: SheetItem[] = [
+    ...(overlap ? overlapItems(overlap) : []),
+    ...template.marks.map((part): SheetItem => ({ kind: 'path', role: 'mark', layer: 'mark', part })),
+    ...template.stationLines.map(
+      (s): SheetItem => ({ kind: 'path', role: 'station-line', layer: 'mark', part: { kind: 'segment', from: s.from, to: s.to }, station: s.n }),
+    ),
+    ...numbers.map((t) => centred(t, 'station-number', false, { stations: t.stations })),
+    ...(template.kind === 'wrap' ? [{ kind: 'path', role: 'square-line', layer: 'mark', part: template.squareLine } as const] : []),
+    ...template.cut.map((part): SheetItem => ({ kind: 'path', role: 'cut', layer: 'cut', part })),
+    ...labels.map((t) => centred(t, 'label', true)),
+    ...title.items,
+  ];
+  const plan: SheetPlan = {
+    kind: 'sheet-plan',
+    template: {
+      id: template.id,
+      kind: template.kind,
+      title: template.title,
+      notes: template.notes,
+      ...(template.kind === 'wrap' ? { stretchOutMm: template.stretchOutMm } : {}),
+      ...(template.kind === 'flat' ? {} : { wrapOdMm: template.wrapOdMm }),
+    },
+    units: opts.sheetUnits,
+    job: opts.job,
+    piece: opts.piece,
+    overlapMm: template.kind === 'wrap' ? opts.overlapMm : 0,
+    page: {
+      left: drawing.minX - m,
+      top: drawing.maxY + m,
+      widthMm: 2 * m + title.widthMm,
+      heightMm: m + (drawing.maxY - drawing.minY) + TITLE_GAP_MM + title.heightMm + m,
+    },
+    drawing,
+    items,
+  };
+  checkPlan(plan);
+  return plan;
+}
