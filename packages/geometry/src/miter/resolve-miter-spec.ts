@@ -2,7 +2,7 @@
  * Checks a miter spec and resolves its choices (welds or pieces, radius in mm
  * or in nominal sizes).
  */
-import { GirthError, MM_PER_INCH as MM_PER_IN, requireFinite, requireInRange, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
+import { BEND_DEG, GirthError, requireWithin, MM_PER_INCH as MM_PER_IN, requireFinite, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
 import { fitRadiusMm, type CutFitSurface } from '../plane-cut/fit-surface.js';
 import { resolvePipeSection, type ResolvedPipeSection } from '../pipe-section.js';
 import { MAX_MITER_RADIUS_MM, MAX_MITER_WELDS } from './limits.js';
@@ -30,7 +30,7 @@ export function resolveMiterSpec(spec: MiterSpec): ResolvedMiterSpec {
     throw new GirthError('EMPTY_INPUT', 'miter', 'miter: give the pipe, the bend and the number of welds or pieces', spec);
   }
   const pipe = resolvePipeSection(spec.pipe);
-  const bendDeg = requireInRange(spec.bendDeg, 'bendDeg', 0, 180, { minOpen: true, unit: 'degrees' });
+  const bendDeg = requireWithin(spec.bendDeg, 'bendDeg', BEND_DEG);
   const { welds, field: countField } = resolveWelds(spec);
   const cutAngleDeg = bendDeg / (2 * welds);
   if (!(cutAngleDeg < 90)) {

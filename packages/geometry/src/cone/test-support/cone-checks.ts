@@ -48,15 +48,19 @@ export function distanceToCone(p: V, R: number, r: number, L: number, e: number)
   return f((a + b) / 2);
 }
 
-/** A reducer of plausible shop size: large diameter 20..3000 mm, small 5..95 % of it, length 5..3000 mm. */
+/**
+ * A reducer of plausible shop size and within Girth's limits (`@girth/pipes`
+ * limits.ts): large diameter 20..3000 mm, small 5..95 % of it but at least
+ * 3 mm, length 5..3000 mm but short enough for an included angle of at least
+ * 0.5° (L ≤ 100 (D − d), since tan 0.25° ≈ 1 / 229).
+ */
 export const reducerArb = fc
   .record({
     largeDiameterMm: fc.double({ min: 20, max: 3000, noNaN: true }),
     smallFraction: fc.double({ min: 0.05, max: 0.95, noNaN: true }),
     lengthMm: fc.double({ min: 5, max: 3000, noNaN: true }),
   })
-  .map((x) => ({
-    largeDiameterMm: x.largeDiameterMm,
-    smallDiameterMm: x.largeDiameterMm * x.smallFraction,
-    lengthMm: x.lengthMm,
-  }));
+  .map((x) => {
+    const smallDiameterMm = Math.max(x.largeDiameterMm * x.smallFraction, 3);
+    return { largeDiameterMm: x.largeDiameterMm, smallDiameterMm, lengthMm: Math.min(x.lengthMm, 100 * (x.largeDiameterMm - smallDiameterMm)) };
+  });
