@@ -11,7 +11,7 @@ import { toResultJson } from '@girth/table';
 import { CAUTION } from '@girth/unroll';
 import { layoutBranch } from '@girth/unroll';
 import { GIRTH_VERSION } from './run-cli.js';
-import { JOINT_COMMANDS } from './commands/joint-commands.js';
+import { JOINTS } from './joints/registry.js';
 import { runCaptured, runJson } from './test-support/capture.js';
 import { expectClose } from './test-support/close.js';
 import { exampleArgv, helpExampleLines } from './test-support/help-examples.js';
@@ -399,7 +399,7 @@ describe('existing output files', () => {
 });
 
 describe('help', () => {
-  const helps: readonly (readonly string[])[] = [['--help'], ...JOINT_COMMANDS.map((c) => [c.name, '--help']), ['run', '--help'], ['pipe', '--help']];
+  const helps: readonly (readonly string[])[] = [['--help'], ...JOINTS.map((c) => [c.name, '--help']), ['run', '--help'], ['pipe', '--help']];
 
   for (const argv of helps) {
     it(`girth ${argv.join(' ')} exits 0 and every example line it shows runs`, async () => {
