@@ -64,7 +64,7 @@ describe.each(both)('%s cone: bad input gets a typed error naming the field and 
   });
   it('both or neither of length and apex angle', () => {
     expectError(() => layout({ ...good, apexAngleDeg: 20 }), 'BAD_OPTION', 'apexAngleDeg', /not both/);
-    expectError(() => layout({ ...good, lengthMm: undefined }), 'BAD_OPTION', 'lengthMm');
+    expectError(() => layout({ ...good, lengthMm: undefined }), 'MISSING_INPUT', 'lengthMm');
   });
   it('apex angle outside its range', () => {
     expectError(() => layout({ ...good, lengthMm: undefined, apexAngleDeg: 0 }), 'OUT_OF_RANGE', 'apexAngleDeg');

@@ -72,7 +72,7 @@ const SURFACE_PREFIX: Readonly<Record<DiameterSurface, string>> = { outside: 'OD
  *   not at least `REDUCER_STEP_MM` below the large one (field
  *   `smallDiameterMm`), a plate outside `PLATE_MM`, an apex angle outside
  *   `CONE_APEX_ANGLE_DEG` (field `lengthMm` when the length gave it; limits in `@girth/pipes`), stations outside
- *   4..360 or segments outside 1..stations; `BAD_OPTION` for both or neither of
+ *   4..360 or segments outside 1..stations; `MISSING_INPUT` for neither length nor angle; `BAD_OPTION` for both of
  *   length and angle, segments that do not divide the stations, an unknown
  *   `diametersAt` or label/formatter of the wrong type; `WALL_TOO_THICK` for a
  *   plate too thick for the small end (see `maxPlateThicknessMm`).
@@ -106,7 +106,7 @@ export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: Co
     throw new GirthError('BAD_OPTION', 'apexAngleDeg', 'apexAngleDeg: give the length or the apex angle, not both', spec.apexAngleDeg);
   }
   if (!hasLength && !hasAngle) {
-    throw new GirthError('BAD_OPTION', 'lengthMm', 'lengthMm: give the length between the ends along the axis, or the apex angle', undefined);
+    throw new GirthError('MISSING_INPUT', 'lengthMm', 'lengthMm: give the length between the ends along the axis, or the apex angle', undefined);
   }
   const lengthMm = hasLength
     ? requirePositive(spec.lengthMm, 'lengthMm')
