@@ -20,8 +20,8 @@ describe('pipeFromDimensions', () => {
       fc.property(fc.double({ min: DIAMETER_MM.min, max: DIAMETER_MM.max, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (od, t) => {
         const wall = WALL_MM.min + (Math.min(od * 0.4999, WALL_MM.max) - WALL_MM.min) * t;
         const p = pipeFromDimensions(od, wall);
-        const share = wall / od;
-        expect(p.idMm).toBe(od - 2 * od * share);
+        expect(p.wallMm).toBe(wall);
+        expect(p.idMm).toBe(od - 2 * wall);
         expect(p.idMm).toBeGreaterThan(0);
       }),
     );

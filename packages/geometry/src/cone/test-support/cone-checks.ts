@@ -7,11 +7,8 @@ import fc from 'fast-check';
 
 type V = readonly [number, number, number];
 
-/** Throws unless |actual − expected| ≤ tol (absolute); NaN never passes. */
-export function expectNear(actual: number, expected: number, tol: number, label: string): void {
-  const diff = Math.abs(actual - expected);
-  if (!(diff <= tol)) throw new Error(`${label}: got ${actual}, expected ${expected} ± ${tol} (off by ${diff})`);
-}
+/** Throws unless |actual − expected| ≤ tol (absolute); NaN never passes. The shared helper under its older name. */
+export { expectClose as expectNear } from '@girth/pipes/test-support';
 
 /** Distance from point p to the infinite line through a and b. */
 export function distanceToLine(p: V, a: V, b: V): number {
