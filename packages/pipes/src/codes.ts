@@ -14,7 +14,9 @@ import type { GirthErrorCode } from './errors.js';
  * outside 1..90°) is now `OUT_OF_RANGE` like every other number outside its
  * bounds; a missing required option or job key is `MISSING_INPUT` (was
  * `BAD_OPTION` on the command line, `BAD_JOB` in a job file); a word that is
- * not one of the allowed ones is `BAD_CHOICE` (was `BAD_OPTION`/`BAD_JOB`); a
+ * not one of the allowed ones is `BAD_CHOICE` (was `BAD_OPTION`/`BAD_JOB`; in
+ * the library too: `fit`, contact surfaces, `fitSurface`, `diametersAt`,
+ * `seam`); a
  * job-file number outside its bounds is `OUT_OF_RANGE` and a job-file value
  * that should be a number is `NOT_A_NUMBER` (were `BAD_JOB`).
  *
@@ -38,7 +40,7 @@ export const ERROR_CODES: Readonly<Record<GirthErrorCode, string>> = {
   BRANCH_TOO_LARGE: 'a branch that does not fit on its header',
   OFFSET_MISSES: 'a branch offset that takes the branch off the header',
   NO_INTERSECTION: 'pieces that do not meet as placed',
-  BAD_CHOICE: 'a word that is not one of the allowed ones (--fit, --surface, units, outputs)',
+  BAD_CHOICE: 'a word that is not one of the allowed ones (--fit, --surface, units, outputs; fit, fitSurface, diametersAt, seam in library calls)',
   BAD_TEXT: 'a label with control characters or too long to print',
   BAD_OPTION: 'a command-line option that does not exist, is given twice, lacks its value, or does nothing with the others given; options of a library call that cannot go together',
   BAD_JOB: 'a job file that cannot be read, is not JSON, or has a key a job or piece does not take',

@@ -31,6 +31,7 @@ describe('limits', () => {
     expect(formatPair(84.9001, 84.9)).toEqual(['84.9001', '84.9']);
     expect(formatPair(0.000001, 3)).toEqual(['0.000001', '3']);
     expect(formatPair(5, 5)).toEqual(['5', '5']);
+    expect(formatPair(500.00000000000006, 500)).toEqual(['500.00000000000006', '500']);
   });
 
   it('refuses a value outside with OUT_OF_RANGE naming the field, the limit and the reason', () => {

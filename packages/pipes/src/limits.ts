@@ -213,7 +213,9 @@ export function formatPair(value: number, bound: number, decimals = 3): readonly
   let d = decimals;
   while (d < 9 && value !== bound && text(value, d) === text(bound, d)) d += 1;
   // A tiny value never reads as 0 (0.000001 mm is not "0 mm").
-  const v = value !== 0 && text(value, d) === '0' ? String(Number(value.toPrecision(3))) : text(value, d);
+  let v = value !== 0 && text(value, d) === '0' ? String(Number(value.toPrecision(3))) : text(value, d);
+  // Closer than 9 decimals: every digit there is (500.00000000000006 is above 500).
+  if (value !== bound && v === text(bound, d)) v = String(value);
   return [v, text(bound, d)];
 }
 

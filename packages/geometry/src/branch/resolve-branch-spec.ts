@@ -23,8 +23,8 @@ export const FIT_CONTACT: Readonly<Record<BranchFit, BranchContact>> = {
  *   `NOT_A_NUMBER` / `NOT_FINITE` naming the field; `NEGATIVE` for an OD,
  *   wall or nominal size ≤ 0 or a negative `gapMm`; `WALL_TOO_THICK` when a
  *   wall is half the OD or more (the pipe checks of `resolvePipeSection`, with
- *   fields `header.*` and `branch.*`); `OUT_OF_RANGE` for `angleDeg` outside [1, 90] (JOINT_ANGLE_DEG in `@girth/pipes` limits); `BAD_OPTION` for
- *   an unknown `fit` or `contact` or a label that is not text.
+ *   fields `header.*` and `branch.*`); `OUT_OF_RANGE` for `angleDeg` outside [1, 90] (JOINT_ANGLE_DEG in `@girth/pipes` limits); `BAD_CHOICE` for
+ *   an unknown `fit` or contact surface; `BAD_OPTION` for a `contact` that is not an object or a label that is not text.
  * @example resolveBranchSpec({ header: { odMm: 323.85, wallMm: 9.525 }, branch: { odMm: 168.275, wallMm: 7.112 } }).fit // 'set-on'
  */
 export function resolveBranchSpec(spec: BranchSpec): ResolvedBranchSpec {
@@ -49,7 +49,7 @@ function resolveAngle(value: unknown): number {
 function resolveFit(value: unknown): BranchFit {
   if (value === undefined) return 'set-on';
   if (value === 'set-on' || value === 'set-in') return value;
-  throw new GirthError('BAD_OPTION', 'fit', `fit: must be 'set-on' or 'set-in', got ${JSON.stringify(value)}`, value);
+  throw new GirthError('BAD_CHOICE', 'fit', `fit: must be 'set-on' or 'set-in', got ${JSON.stringify(value)}`, value);
 }
 
 function resolveContact(value: unknown): BranchContact {
@@ -62,5 +62,5 @@ function resolveContact(value: unknown): BranchContact {
 
 function resolveFace(value: unknown, field: string): PipeFace {
   if (value === 'inside' || value === 'outside') return value;
-  throw new GirthError('BAD_OPTION', field, `${field}: must be 'inside' or 'outside', got ${JSON.stringify(value)}`, value);
+  throw new GirthError('BAD_CHOICE', field, `${field}: must be 'inside' or 'outside', got ${JSON.stringify(value)}`, value);
 }

@@ -155,8 +155,8 @@ describe('solveBranch', () => {
       [{ ...ok, branch: { odMm: Number.NaN, wallMm: 3 } }, 'NOT_A_NUMBER', 'branch.odMm'],
       [{ ...ok, header: { odMm: 300, wallMm: Number.NEGATIVE_INFINITY } }, 'NOT_FINITE', 'header.wallMm'],
       [{ ...ok, header: { odMm: -300, wallMm: 3 } }, 'NEGATIVE', 'header.odMm'],
-      [{ ...ok, fit: 'welded' as never }, 'BAD_OPTION', 'fit'],
-      [{ ...ok, contact: { branch: 'inside', header: 'middle' as never } }, 'BAD_OPTION', 'contact.header'],
+      [{ ...ok, fit: 'welded' as never }, 'BAD_CHOICE', 'fit'],
+      [{ ...ok, contact: { branch: 'inside', header: 'middle' as never } }, 'BAD_CHOICE', 'contact.header'],
       [{ branch: NPS6 } as never, 'EMPTY_INPUT', 'header'],
     ];
     for (const [spec, code, field] of cases) {

@@ -45,7 +45,7 @@ describe('resolveMiterSpec', () => {
     expectGirthError(() => resolveMiterSpec({ ...BASE, radiusMm: undefined, radiusNps: 0.5 }), 'OUT_OF_RANGE', 'radiusNps');
     expectGirthError(() => resolveMiterSpec({ ...BASE, radiusMm: undefined, radiusNps: Number.NaN }), 'NOT_A_NUMBER', 'radiusNps');
     expectGirthError(() => resolveMiterSpec({ ...BASE, tangentMm: -1 }), 'NEGATIVE', 'tangentMm');
-    expectGirthError(() => resolveMiterSpec({ ...BASE, fitSurface: 'mid' as never }), 'BAD_OPTION', 'fitSurface');
+    expectGirthError(() => resolveMiterSpec({ ...BASE, fitSurface: 'mid' as never }), 'BAD_CHOICE', 'fitSurface');
     expectGirthError(() => resolveMiterSpec({ ...BASE, pipe: { odMm: 0, wallMm: 1 } }), 'NEGATIVE', 'pipe.odMm');
     expectGirthError(() => resolveMiterSpec(undefined as never), 'EMPTY_INPUT', 'miter');
   });

@@ -22,7 +22,7 @@ import type { MiterSpec, ResolvedMiterSpec } from './types.js';
  *    `radiusNps` without `pipe.npsIn`;
  *  - `OUT_OF_RANGE` (`radiusMm`/`radiusNps`) for a radius below half the OD;
  *  - `NEGATIVE` (`tangentMm`); `NOT_A_NUMBER`/`NOT_FINITE` for NaN or Infinity
- *    anywhere; `BAD_OPTION` (`fitSurface`); the pipe errors of `resolvePipeSection`.
+ *    anywhere; `BAD_CHOICE` (`fitSurface`); the pipe errors of `resolvePipeSection`.
  * @example resolveMiterSpec({ pipe: { odMm: 323.9, wallMm: 9.53 }, bendDeg: 90, pieces: 4, radiusMm: 457.2 }).cutAngleDeg // 15
  */
 export function resolveMiterSpec(spec: MiterSpec): ResolvedMiterSpec {

@@ -85,7 +85,7 @@ describe.each(both)('%s cone: bad input gets a typed error naming the field and 
     expectError(() => layout(good, { stations: 16, segments: 3 }), 'BAD_OPTION', 'segments', /multiple of 3/);
   });
   it('unknown surface, labels and spec of the wrong kind', () => {
-    expectError(() => layout({ ...good, diametersAt: 'middle' as never }), 'BAD_OPTION', 'diametersAt');
+    expectError(() => layout({ ...good, diametersAt: 'middle' as never }), 'BAD_CHOICE', 'diametersAt');
     expectError(() => layout({ ...good, largeLabel: 42 as unknown as string }), 'BAD_OPTION', 'largeLabel');
     expectError(() => layout(null as unknown as ConeSpec), 'BAD_JOB', 'spec');
   });
@@ -93,7 +93,7 @@ describe.each(both)('%s cone: bad input gets a typed error naming the field and 
 
 describe('eccentric cone: its own options', () => {
   it('unknown seam, chord tolerance outside 0.001..5 mm, apex angle of 90° or more', () => {
-    expectError(() => layoutEccentricCone(good, { seam: 'top' as never }), 'BAD_OPTION', 'seam');
+    expectError(() => layoutEccentricCone(good, { seam: 'top' as never }), 'BAD_CHOICE', 'seam');
     expectError(() => layoutEccentricCone(good, { chordToleranceMm: 0 }), 'OUT_OF_RANGE', 'chordToleranceMm');
     expectError(() => layoutEccentricCone(good, { chordToleranceMm: 6 }), 'OUT_OF_RANGE', 'chordToleranceMm');
     expectError(() => layoutEccentricCone({ ...good, lengthMm: undefined, apexAngleDeg: 90 }), 'OUT_OF_RANGE', 'apexAngleDeg');

@@ -48,7 +48,7 @@ export function distanceToCone(p: V, R: number, r: number, L: number, e: number)
 /**
  * A reducer of plausible shop size and within Girth's limits (`@girth/pipes`
  * limits.ts): large diameter 20..3000 mm, small 5..95 % of it but at least
- * 3 mm, length 5..3000 mm but short enough for an included angle of at least
+ * 3 mm and at least 1.5 mm below the large end (REDUCER_STEP_MM is 1 mm), length 5..3000 mm but short enough for an included angle of at least
  * 0.5° (L ≤ 100 (D − d), since tan 0.25° ≈ 1 / 229).
  */
 export const reducerArb = fc
@@ -58,6 +58,6 @@ export const reducerArb = fc
     lengthMm: fc.double({ min: 5, max: 3000, noNaN: true }),
   })
   .map((x) => {
-    const smallDiameterMm = Math.max(x.largeDiameterMm * x.smallFraction, 3);
+    const smallDiameterMm = Math.min(Math.max(x.largeDiameterMm * x.smallFraction, 3), x.largeDiameterMm - 1.5);
     return { largeDiameterMm: x.largeDiameterMm, smallDiameterMm, lengthMm: Math.min(x.lengthMm, 100 * (x.largeDiameterMm - smallDiameterMm)) };
   });

@@ -73,8 +73,9 @@ const SURFACE_PREFIX: Readonly<Record<DiameterSurface, string>> = { outside: 'OD
  *   `smallDiameterMm`), a plate outside `PLATE_MM`, an apex angle outside
  *   `CONE_APEX_ANGLE_DEG` (field `lengthMm` when the length gave it; limits in `@girth/pipes`), stations outside
  *   4..360 or segments outside 1..stations; `MISSING_INPUT` for neither length nor angle; `BAD_OPTION` for both of
- *   length and angle, segments that do not divide the stations, an unknown
- *   `diametersAt` or label/formatter of the wrong type; `WALL_TOO_THICK` for a
+ *   length and angle, segments that do not divide the stations, or a
+ *   label/formatter of the wrong type; `BAD_CHOICE` for an unknown
+ *   `diametersAt`; `WALL_TOO_THICK` for a
  *   plate too thick for the small end (see `maxPlateThicknessMm`).
  * @example resolveCone({ largeDiameterMm: 219.1, smallDiameterMm: 168.3, lengthMm: 152, thicknessMm: 6 }, {}, 'concentric').lengthMm // 152
  */
@@ -170,13 +171,13 @@ export const CONE_MAX_CHORD_TOLERANCE_MM = CHORD_TOLERANCE_MM.max;
 
 /**
  * The eccentric-only options, checked.
- * @throws GirthError `BAD_OPTION` for an unknown seam, `OUT_OF_RANGE` for a chord tolerance outside 0.001..5 mm.
+ * @throws GirthError `BAD_CHOICE` for an unknown seam, `OUT_OF_RANGE` for a chord tolerance outside 0.001..5 mm.
  * @example resolveEccentricOptions({}).seam // 'flat-side'
  */
 export function resolveEccentricOptions(options: EccentricConeOptions): { readonly seam: EccentricSeam; readonly chordToleranceMm: number } {
   const seam = options.seam ?? 'flat-side';
   if (seam !== 'flat-side' && seam !== 'opposite') {
-    throw new GirthError('BAD_OPTION', 'seam', `seam: must be 'flat-side' or 'opposite', got ${String(seam)}`, seam);
+    throw new GirthError('BAD_CHOICE', 'seam', `seam: must be 'flat-side' or 'opposite', got ${String(seam)}`, seam);
   }
   const chordToleranceMm = requireWithin(options.chordToleranceMm ?? CONE_DEFAULT_CHORD_TOLERANCE_MM, 'chordToleranceMm', CHORD_TOLERANCE_MM);
   return { seam, chordToleranceMm };
