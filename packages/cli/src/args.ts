@@ -81,12 +81,12 @@ export function stringOption(args: ParsedArgs, name: string): string | undefined
 
 /**
  * The value of a required string option.
- * @throws GirthError `BAD_OPTION` when it is missing.
+ * @throws GirthError `MISSING_INPUT` when it is missing or blank.
  */
 export function requireOption(args: ParsedArgs, name: string, example: string): string {
   const v = stringOption(args, name);
   if (v === undefined || v.trim() === '') {
-    throw new GirthError('BAD_OPTION', `--${name}`, `--${name}: required, e.g. --${name} ${example}`);
+    throw new GirthError('MISSING_INPUT', `--${name}`, `--${name}: required, e.g. --${name} ${example}`);
   }
   return v;
 }
@@ -110,21 +110,21 @@ export function numberOption(args: ParsedArgs, name: string, fallback?: number):
 
 /**
  * One of the allowed words, or `fallback` when absent.
- * @throws GirthError `BAD_OPTION` listing the allowed words.
+ * @throws GirthError `BAD_CHOICE` listing the allowed words.
  */
 export function choiceOption<const T extends string>(args: ParsedArgs, name: string, allowed: readonly T[], fallback: T): T {
   const v = stringOption(args, name);
   if (v === undefined) return fallback;
   const found = allowed.find((a) => a === v.trim().toLowerCase());
   if (found === undefined) {
-    throw new GirthError('BAD_OPTION', `--${name}`, `--${name}: must be one of ${allowed.join(', ')}; got "${v}"`, v);
+    throw new GirthError('BAD_CHOICE', `--${name}`, `--${name}: must be one of ${allowed.join(', ')}; got "${v}"`, v);
   }
   return found;
 }
 
 /**
  * One of the allowed words, or `undefined` when absent.
- * @throws GirthError `BAD_OPTION` listing the allowed words.
+ * @throws GirthError `BAD_CHOICE` listing the allowed words.
  */
 export function optionalChoice<const T extends string>(args: ParsedArgs, name: string, allowed: readonly T[]): T | undefined {
   return stringOption(args, name) === undefined ? undefined : choiceOption<T>(args, name, allowed, allowed[0]!);
@@ -132,10 +132,10 @@ export function optionalChoice<const T extends string>(args: ParsedArgs, name: s
 
 /**
  * The value of a required number option.
- * @throws GirthError `BAD_OPTION` when missing, `NOT_A_NUMBER` when not a number.
+ * @throws GirthError `MISSING_INPUT` when missing, `NOT_A_NUMBER` when not a number.
  */
 export function requireNumberOption(args: ParsedArgs, name: string, example: string): number {
   const v = numberOption(args, name);
-  if (v === undefined) throw new GirthError('BAD_OPTION', `--${name}`, `--${name}: required, e.g. --${name} ${example}`);
+  if (v === undefined) throw new GirthError('MISSING_INPUT', `--${name}`, `--${name}: required, e.g. --${name} ${example}`);
   return v;
 }

@@ -1,12 +1,12 @@
 /**
  * The top-level help text.
  */
-import { JOINT_COMMANDS } from './commands/joint-commands.js';
-import { REPORT_CAUTION } from './report.js';
+import { CAUTION as REPORT_CAUTION } from '@girth/pipes';
+import { JOINTS } from './joints/registry.js';
 
 /** `girth --help`. */
 export function mainHelp(version: string): string {
-  const joints = JOINT_COMMANDS.map((c) => `  ${c.name.padEnd(9)} ${c.summary}`).join('\n');
+  const joints = JOINTS.map((c) => `  ${c.name.padEnd(9)} ${c.summary}`).join('\n');
   return `girth ${version}: exact, full-size cutting templates for pipe
 
 Usage: girth <command> [options]      girth <command> --help for its options

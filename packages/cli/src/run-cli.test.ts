@@ -14,7 +14,7 @@ import { describeResult, layoutBranch } from '@girth/unroll';
 /** How an inch job words its templates: feet-inch-sixteenths first (the CLI's default style). */
 const INCH_WORDS = { units: 'in', lengthFormat: 'ft-in', fraction: 16 } as const;
 import { GIRTH_VERSION } from './run-cli.js';
-import { JOINT_COMMANDS } from './commands/joint-commands.js';
+import { JOINTS } from './joints/registry.js';
 import { runCaptured, runJson } from './test-support/capture.js';
 import { expectClose } from './test-support/close.js';
 import { exampleArgv, helpExampleLines } from './test-support/help-examples.js';
@@ -413,7 +413,7 @@ describe('existing output files', () => {
 });
 
 describe('help', () => {
-  const helps: readonly (readonly string[])[] = [['--help'], ...JOINT_COMMANDS.map((c) => [c.name, '--help']), ['run', '--help'], ['pipe', '--help']];
+  const helps: readonly (readonly string[])[] = [['--help'], ...JOINTS.map((c) => [c.name, '--help']), ['run', '--help'], ['pipe', '--help']];
 
   for (const argv of helps) {
     it(`girth ${argv.join(' ')} exits 0 and every example line it shows runs`, async () => {

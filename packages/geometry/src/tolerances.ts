@@ -3,6 +3,8 @@
  * floats take an `eps` option defaulting to one of these; nothing is global or
  * mutable.
  */
+import { JOINT_ANGLE_DEG } from '@girth/pipes';
+
 
 /**
  * Relative tolerance for deciding that a quadratic's discriminant is zero,
@@ -22,8 +24,9 @@ export const SHALLOW_LATERAL_WARN_DEG = 15;
  * (a lateral's header, a cut-back's plane) that Girth lays out. At 1° the cut
  * already runs out about 57 diameters along the pipe (cot 1°); below it the
  * numbers stop meaning anything a shop can cut, and toward 0 they overflow.
+ * The bound itself lives in `@girth/pipes` (`JOINT_ANGLE_DEG`), shared with the command line.
  */
-export const MIN_JOINT_ANGLE_DEG = 1;
+export const MIN_JOINT_ANGLE_DEG = JOINT_ANGLE_DEG.min;
 
 /** Geometry closer than this (mm) is treated as touching; 1 nm, far below any shop measurement. */
 export const LENGTH_EPS_MM = 1e-6;

@@ -4,9 +4,14 @@
  * message a fitter understands.
  */
 
-/** Stable error codes. Never rename one; add new ones freely. */
+/**
+ * Stable error codes, one per kind of mistake; {@link ERROR_CODES} in
+ * `codes.ts` says what each means. Never reuse one for another kind; add new
+ * ones freely.
+ */
 export type GirthErrorCode =
   | 'EMPTY_INPUT'
+  | 'MISSING_INPUT'
   | 'NOT_A_NUMBER'
   | 'NOT_FINITE'
   | 'NEGATIVE'
@@ -22,7 +27,8 @@ export type GirthErrorCode =
   | 'BRANCH_TOO_LARGE'
   | 'OFFSET_MISSES'
   | 'NO_INTERSECTION'
-  | 'BAD_ANGLE'
+  | 'BAD_CHOICE'
+  | 'BAD_TEXT'
   | 'BAD_OPTION'
   | 'BAD_JOB';
 

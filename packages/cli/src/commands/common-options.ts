@@ -1,10 +1,11 @@
 /**
  * Options every joint command takes: units, stations, outputs, labels.
  */
-import { GirthError, type LengthUnit } from '@girth/pipes';
+import { DEFAULT_STATIONS, GirthError, rangeText, requireWithin, STATIONS, type LengthUnit } from '@girth/pipes';
 import type { DxfVersion } from '@girth/dxf';
 import type { TableLengthFormat } from '@girth/table';
 import { choiceOption, numberOption, stringOption, type OptionSpec, type ParsedArgs } from '../args.js';
+import { checkLabel } from '../labels.js';
 import type { JointContext } from '../joints/types.js';
 import type { OutputRequest, OutputStyle } from '../outputs.js';
 
@@ -28,13 +29,13 @@ export const COMMON_OPTIONS: OptionSpec = {
 /** Help lines for the shared options. */
 export const COMMON_OPTIONS_HELP = `Units and stations:
   --units in|mm          unit of bare numbers and of every output (default in)
-  --stations N           equal stations around the girth, 4 to 360 (default 16)
-  --decimal              inches as decimals instead of feet-inch-fractions
-  --fraction 8|16|32     round feet-inch output to 1/8, 1/16 or 1/32 in (default 16)
+  --stations N           equal stations around the girth, ${rangeText(STATIONS)} (default ${DEFAULT_STATIONS})
+  --decimal              inches as decimals instead of feet-inch-fractions (inches only)
+  --fraction 8|16|32     round feet-inch output to 1/8, 1/16 or 1/32 in (default 16; feet-inch only)
 Outputs (without any, the ordinate table is printed):
   --svg FILE             true-size wrap/pattern for printing or plotting
   --dxf FILE             flat pattern for a cutting table
-  --dxf-version 2007|r12 DXF flavour (default 2007; r12 for older tables)
+  --dxf-version 2007|r12 DXF flavour (default 2007; r12 for older tables; with --dxf)
   --csv FILE             station table as CSV
   --json                 print the result as JSON on standard output
   --job TEXT, --piece TEXT  labels printed on every sheet
@@ -57,16 +58,14 @@ export interface CommonSettings {
  */
 export function readCommonOptions(args: ParsedArgs): CommonSettings {
   const units = choiceOption<LengthUnit>(args, 'units', ['in', 'mm'], 'in');
-  const stations = numberOption(args, 'stations', 16) ?? 16;
-  if (!Number.isInteger(stations) || stations < 4 || stations > 360) {
-    throw new GirthError('OUT_OF_RANGE', '--stations', `--stations: must be a whole number from 4 to 360, got ${stations}`, stations);
-  }
+  const stations = requireWithin(numberOption(args, 'stations', DEFAULT_STATIONS), '--stations', STATIONS);
+  refuseIdleOptions(args, units);
   const fractionText = choiceOption(args, 'fraction', ['8', '16', '32'], '16');
   const fraction = Number(fractionText) as 8 | 16 | 32;
   const tableFormat: TableLengthFormat = units === 'mm' ? 'mm' : args.values.decimal === true ? 'in' : 'ft-in';
   const dxfVersion: DxfVersion = choiceOption(args, 'dxf-version', ['2007', 'r12'], '2007') === 'r12' ? 'R12' : 'AC1021';
-  const job = stringOption(args, 'job');
-  const piece = stringOption(args, 'piece');
+  const job = checkLabel(stringOption(args, 'job'), '--job');
+  const piece = checkLabel(stringOption(args, 'piece'), '--piece');
   const request: OutputRequest = {
     ...(stringOption(args, 'svg') !== undefined ? { svg: stringOption(args, 'svg')! } : {}),
     ...(stringOption(args, 'dxf') !== undefined ? { dxf: stringOption(args, 'dxf')! } : {}),
@@ -85,6 +84,22 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
     json: args.values.json === true,
     force: args.values.force === true,
   };
+}
+
+/**
+ * Refuses options that would do nothing with the others given, so a fitter
+ * does not believe they took effect: `--decimal` or `--fraction` with mm,
+ * `--fraction` with `--decimal`, `--dxf-version` without `--dxf`.
+ * @throws GirthError `BAD_OPTION` naming the idle option and what it needs.
+ */
+export function refuseIdleOptions(args: ParsedArgs, units: LengthUnit): void {
+  const idle = (option: string, why: string): never => {
+    throw new GirthError('BAD_OPTION', option, `${option}: ${why}`);
+  };
+  if (units === 'mm' && args.values.decimal === true) idle('--decimal', 'millimetres are always decimal; --decimal is for inches (--units in)');
+  if (units === 'mm' && stringOption(args, 'fraction') !== undefined) idle('--fraction', 'millimetres are not rounded to fractions; --fraction is for feet-inch output (--units in)');
+  if (args.values.decimal === true && stringOption(args, 'fraction') !== undefined) idle('--fraction', 'decimal inches are not rounded to fractions; give --decimal or --fraction, not both');
+  if (stringOption(args, 'dxf-version') !== undefined && stringOption(args, 'dxf') === undefined) idle('--dxf-version', 'no DXF is written; give --dxf FILE too, or leave --dxf-version out');
 }
 
 /** `radiusNps` → `radius-nps`, as the option is typed. */

@@ -34,10 +34,27 @@ export function pieceStem(label: string): string {
 }
 
 /**
+ * Refuses job keys that would do nothing with the others given (as the command
+ * line refuses the same options): `decimal` or `fraction` with mm, `fraction`
+ * with `decimal`, `dxfVersion` when no DXF is written.
+ * @throws GirthError `BAD_OPTION` naming the idle key.
+ */
+export function refuseIdleJobKeys(job: Job): void {
+  const idle = (key: string, why: string): never => {
+    throw new GirthError('BAD_OPTION', key, `${key}: ${why}`);
+  };
+  if (job.units === 'mm' && job.decimal !== undefined) idle('decimal', 'millimetres are always decimal; "decimal" is for inches ("units": "in")');
+  if (job.units === 'mm' && job.fraction !== undefined) idle('fraction', 'millimetres are not rounded to fractions; "fraction" is for feet-inch output ("units": "in")');
+  if (job.decimal === true && job.fraction !== undefined) idle('fraction', 'decimal inches are not rounded to fractions; give "decimal" or "fraction", not both');
+  if (job.dxfVersion !== undefined && job.outputs !== undefined && !job.outputs.includes('dxf')) idle('dxfVersion', 'no DXF is written ("outputs" leaves out "dxf"); add "dxf" to outputs or leave dxfVersion out');
+}
+
+/**
  * Lays out every piece of a job and plans its files in `outDir`.
  * @throws GirthError naming the piece and field at fault (`pieces[2].header`).
  */
 export function planJob(job: Job, outDir: string): JobPlan {
+  refuseIdleJobKeys(job);
   const tableFormat: TableLengthFormat = job.units === 'mm' ? 'mm' : job.decimal === true ? 'in' : 'ft-in';
   const fraction = job.fraction ?? 16;
   const report: ReportStyle = { units: job.units, tableFormat, fraction };

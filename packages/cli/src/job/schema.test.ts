@@ -1,6 +1,7 @@
 /**
  * The job file schema: the demo job passes; every mistake is a GirthError
- * `BAD_JOB` whose field is the path of the bad value, as a fitter would look
+ * with the code the command line gives for the same kind of mistake
+ * (codes.ts in @girth/pipes) and a field that is the path of the bad value, as a fitter would look
  * for it in the file (`pieces[1].header`).
  */
 import { readFileSync } from 'node:fs';
@@ -36,27 +37,26 @@ describe('parseJob', () => {
     expect(job.pieces).toHaveLength(1);
   });
 
-  const cases: readonly { readonly name: string; readonly edit: (j: ReturnType<typeof demo>) => unknown; readonly field: string }[] = [
-    { name: 'a missing units', edit: (j) => ({ ...j, units: undefined }), field: 'units' },
-    { name: 'an unknown unit', edit: (j) => ({ ...j, units: 'ft' }), field: 'units' },
-    { name: 'an unknown key on the job', edit: (j) => ({ ...j, colour: 'red' }), field: 'colour' },
-    { name: 'an unknown key on a piece', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 2 ? { ...p, colour: 'red' } : p)) }), field: 'pieces[2].colour' },
-    { name: 'an empty header name', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 1 ? { ...p, header: '' } : p)) }), field: 'pieces[1].header' },
-    { name: 'an unknown joint', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 0 ? { ...p, joint: 'wye' } : p)) }), field: 'pieces[0].joint' },
-    { name: 'a bend written as text', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 3 ? { ...p, bend: '90' } : p)) }), field: 'pieces[3].bend' },
-    { name: 'a missing piece label', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 4 ? { ...p, piece: undefined } : p)) }), field: 'pieces[4].piece' },
-    { name: 'a fit that is not set-on or set-in', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 0 ? { ...p, fit: 'welded' } : p)) }), field: 'pieces[0].fit' },
-    { name: 'no pieces', edit: (j) => ({ ...j, pieces: [] }), field: 'pieces' },
-    { name: 'a piece that is not an object', edit: (j) => ({ ...j, pieces: ['tee'] }), field: 'pieces[0]' },
-    { name: 'too few stations', edit: (j) => ({ ...j, stations: 3 }), field: 'stations' },
-    { name: 'a fraction of 1/4 in', edit: (j) => ({ ...j, fraction: 4 }), field: 'fraction' },
-    { name: 'an unknown output kind', edit: (j) => ({ ...j, outputs: ['svg', 'pdf'] }), field: 'outputs[1]' },
+  const cases: readonly { readonly name: string; readonly edit: (j: ReturnType<typeof demo>) => unknown; readonly field: string; readonly code: string }[] = [
+    { name: 'a missing units', edit: (j) => ({ ...j, units: undefined }), field: 'units', code: 'MISSING_INPUT' },
+    { name: 'an unknown unit', edit: (j) => ({ ...j, units: 'ft' }), field: 'units', code: 'BAD_CHOICE' },
+    { name: 'an unknown key on the job', edit: (j) => ({ ...j, colour: 'red' }), field: 'colour', code: 'BAD_JOB' },
+    { name: 'an unknown key on a piece', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 2 ? { ...p, colour: 'red' } : p)) }), field: 'pieces[2].colour', code: 'BAD_JOB' },
+    { name: 'an unknown joint', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 0 ? { ...p, joint: 'wye' } : p)) }), field: 'pieces[0].joint', code: 'BAD_CHOICE' },
+    { name: 'a bend written as text', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 3 ? { ...p, bend: '90' } : p)) }), field: 'pieces[3].bend', code: 'NOT_A_NUMBER' },
+    { name: 'a missing piece label', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 4 ? { ...p, piece: undefined } : p)) }), field: 'pieces[4].piece', code: 'MISSING_INPUT' },
+    { name: 'a fit that is not set-on or set-in', edit: (j) => ({ ...j, pieces: j.pieces.map((p, i) => (i === 0 ? { ...p, fit: 'welded' } : p)) }), field: 'pieces[0].fit', code: 'BAD_CHOICE' },
+    { name: 'no pieces', edit: (j) => ({ ...j, pieces: [] }), field: 'pieces', code: 'MISSING_INPUT' },
+    { name: 'a piece that is not an object', edit: (j) => ({ ...j, pieces: ['tee'] }), field: 'pieces[0]', code: 'BAD_JOB' },
+    { name: 'too few stations', edit: (j) => ({ ...j, stations: 3 }), field: 'stations', code: 'OUT_OF_RANGE' },
+    { name: 'a fraction of 1/4 in', edit: (j) => ({ ...j, fraction: 4 }), field: 'fraction', code: 'BAD_CHOICE' },
+    { name: 'an unknown output kind', edit: (j) => ({ ...j, outputs: ['svg', 'pdf'] }), field: 'outputs[1]', code: 'BAD_CHOICE' },
   ];
 
   for (const c of cases) {
     it(`names the field of ${c.name}: ${c.field}`, () => {
       const error = jobError(c.edit(demo()));
-      expect(error.code).toBe('BAD_JOB');
+      expect(error.code).toBe(c.code);
       expect(error.field).toBe(c.field);
       expect(error.message.startsWith(`${c.field}: `), error.message).toBe(true);
     });

@@ -2,23 +2,11 @@
  * The job's summary table: one line a piece, what it is and its key figures.
  */
 import type { LayoutResult } from '@girth/unroll';
-import { reportLength, type ReportStyle } from '../report.js';
+import { jointNamed } from '../joints/registry.js';
+import type { ReportStyle } from '../report-style.js';
 
 function describe(result: LayoutResult, style: ReportStyle): string {
-  const L = (mm: number): string => reportLength(mm, style);
-  const r = result as LayoutResult & Record<string, unknown>;
-  switch (result.kind) {
-    case 'branch':
-      return `${String(r.angleDeg)} deg, ${String(r.fit)}, offset ${L(Number(r.offsetMm))}, gap ${L(Number(r.gapMm))}`;
-    case 'miter':
-      return `${String(r.bendDeg)} deg bend, ${String(r.pieceCount)} pieces, cut ${Number(r.cutAngleDeg).toFixed(2)} deg, stock ${L(Number(r.stockLengthMm))}`;
-    case 'plane-cut':
-      return `${String(r.angleDeg)} deg to the plane, gap ${L(Number(r.gapMm))}`;
-    case 'reducer':
-      return `${String(r.form)}, length ${L(Number(r.lengthMm))}, plate ${L(Number(r.thicknessMm))}`;
-    default:
-      return '';
-  }
+  return jointNamed(result.kind === 'plane-cut' ? 'cutback' : result.kind)?.describe(result, style) ?? '';
 }
 
 /**

@@ -1,13 +1,12 @@
 /**
- * Comparing numbers within a stated tolerance, with a label in the failure.
+ * Comparing numbers read back from JSON within a stated tolerance: checks the
+ * value is a number, then uses the shared helper (`@girth/pipes/test-support`).
  */
 import { expect } from 'vitest';
+import { expectClose as shared } from '@girth/pipes/test-support';
 
-/** Asserts `|actual - expected| <= tol`; the message names `label` and both values. */
+/** Asserts `actual` is a number with `|actual - expected| <= tol`; the message names `label` and both values. */
 export function expectClose(actual: unknown, expected: number, tol: number, label: string): void {
   expect(typeof actual, `${label}: expected a number, got ${String(actual)}`).toBe('number');
-  const a = actual as number;
-  expect(Number.isFinite(a), `${label}: not finite (${a})`).toBe(true);
-  const diff = Math.abs(a - expected);
-  expect(diff <= tol, `${label}: got ${a}, expected ${expected} ± ${tol} (off by ${diff})`).toBe(true);
+  shared(actual as number, expected, tol, label);
 }

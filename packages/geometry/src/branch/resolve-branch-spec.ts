@@ -1,8 +1,7 @@
 /**
  * Checks a branch joint as given and fills in its defaults.
  */
-import { GirthError, requireFinite, requireNonNegative } from '@girth/pipes';
-import { MIN_JOINT_ANGLE_DEG } from '../tolerances.js';
+import { GirthError, JOINT_ANGLE_DEG, requireFinite, requireNonNegative, requireWithin } from '@girth/pipes';
 import { resolvePipeSection } from '../pipe-section.js';
 import type { BranchContact, BranchFit, BranchPipeSection, BranchSpec, PipeFace, ResolvedBranchSpec } from './types.js';
 
@@ -24,8 +23,8 @@ export const FIT_CONTACT: Readonly<Record<BranchFit, BranchContact>> = {
  *   `NOT_A_NUMBER` / `NOT_FINITE` naming the field; `NEGATIVE` for an OD,
  *   wall or nominal size ≤ 0 or a negative `gapMm`; `WALL_TOO_THICK` when a
  *   wall is half the OD or more (the pipe checks of `resolvePipeSection`, with
- *   fields `header.*` and `branch.*`); `BAD_ANGLE` for `angleDeg` outside [1, 90] (MIN_JOINT_ANGLE_DEG); `BAD_OPTION` for
- *   an unknown `fit` or `contact` or a label that is not text.
+ *   fields `header.*` and `branch.*`); `OUT_OF_RANGE` for `angleDeg` outside [1, 90] (JOINT_ANGLE_DEG in `@girth/pipes` limits); `BAD_CHOICE` for
+ *   an unknown `fit` or contact surface; `BAD_OPTION` for a `contact` that is not an object or a label that is not text.
  * @example resolveBranchSpec({ header: { odMm: 323.85, wallMm: 9.525 }, branch: { odMm: 168.275, wallMm: 7.112 } }).fit // 'set-on'
  */
 export function resolveBranchSpec(spec: BranchSpec): ResolvedBranchSpec {
@@ -44,22 +43,13 @@ export function resolveBranchSpec(spec: BranchSpec): ResolvedBranchSpec {
 
 function resolveAngle(value: unknown): number {
   if (value === undefined) return DEFAULT_BRANCH_ANGLE_DEG;
-  const v = requireFinite(value, 'angleDeg');
-  if (!(v >= MIN_JOINT_ANGLE_DEG && v <= 90)) {
-    throw new GirthError(
-      'BAD_ANGLE',
-      'angleDeg',
-      `angleDeg: the angle between branch and header axes must be from ${MIN_JOINT_ANGLE_DEG}° to 90° (a tee), got ${v}°`,
-      value,
-    );
-  }
-  return v;
+  return requireWithin(value, 'angleDeg', JOINT_ANGLE_DEG);
 }
 
 function resolveFit(value: unknown): BranchFit {
   if (value === undefined) return 'set-on';
   if (value === 'set-on' || value === 'set-in') return value;
-  throw new GirthError('BAD_OPTION', 'fit', `fit: must be 'set-on' or 'set-in', got ${JSON.stringify(value)}`, value);
+  throw new GirthError('BAD_CHOICE', 'fit', `fit: must be 'set-on' or 'set-in', got ${JSON.stringify(value)}`, value);
 }
 
 function resolveContact(value: unknown): BranchContact {
@@ -72,5 +62,5 @@ function resolveContact(value: unknown): BranchContact {
 
 function resolveFace(value: unknown, field: string): PipeFace {
   if (value === 'inside' || value === 'outside') return value;
-  throw new GirthError('BAD_OPTION', field, `${field}: must be 'inside' or 'outside', got ${JSON.stringify(value)}`, value);
+  throw new GirthError('BAD_CHOICE', field, `${field}: must be 'inside' or 'outside', got ${JSON.stringify(value)}`, value);
 }

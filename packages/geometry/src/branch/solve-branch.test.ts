@@ -143,9 +143,9 @@ describe('solveBranch', () => {
   it('rejects bad input with stable codes and fields', () => {
     const ok: BranchSpec = { header: NPS12, branch: NPS6 };
     const cases: [BranchSpec, string, string][] = [
-      [{ ...ok, angleDeg: 0 }, 'BAD_ANGLE', 'angleDeg'],
-      [{ ...ok, angleDeg: 90.0001 }, 'BAD_ANGLE', 'angleDeg'],
-      [{ ...ok, angleDeg: -30 }, 'BAD_ANGLE', 'angleDeg'],
+      [{ ...ok, angleDeg: 0 }, 'OUT_OF_RANGE', 'angleDeg'],
+      [{ ...ok, angleDeg: 90.0001 }, 'OUT_OF_RANGE', 'angleDeg'],
+      [{ ...ok, angleDeg: -30 }, 'OUT_OF_RANGE', 'angleDeg'],
       [{ ...ok, angleDeg: Number.NaN }, 'NOT_A_NUMBER', 'angleDeg'],
       [{ ...ok, offsetMm: Number.POSITIVE_INFINITY }, 'NOT_FINITE', 'offsetMm'],
       [{ ...ok, gapMm: -1 }, 'NEGATIVE', 'gapMm'],
@@ -155,14 +155,14 @@ describe('solveBranch', () => {
       [{ ...ok, branch: { odMm: Number.NaN, wallMm: 3 } }, 'NOT_A_NUMBER', 'branch.odMm'],
       [{ ...ok, header: { odMm: 300, wallMm: Number.NEGATIVE_INFINITY } }, 'NOT_FINITE', 'header.wallMm'],
       [{ ...ok, header: { odMm: -300, wallMm: 3 } }, 'NEGATIVE', 'header.odMm'],
-      [{ ...ok, fit: 'welded' as never }, 'BAD_OPTION', 'fit'],
-      [{ ...ok, contact: { branch: 'inside', header: 'middle' as never } }, 'BAD_OPTION', 'contact.header'],
+      [{ ...ok, fit: 'welded' as never }, 'BAD_CHOICE', 'fit'],
+      [{ ...ok, contact: { branch: 'inside', header: 'middle' as never } }, 'BAD_CHOICE', 'contact.header'],
       [{ branch: NPS6 } as never, 'EMPTY_INPUT', 'header'],
     ];
     for (const [spec, code, field] of cases) {
       expect(girthErrorOf(() => solveBranch(spec)), `${code} ${field}`).toMatchObject({ code, field });
     }
-    expect(girthErrorOf(() => solveBranch({ ...ok, angleDeg: 120 })).message).toMatch(/from 1° to 90°.*got 120°/);
+    expect(girthErrorOf(() => solveBranch({ ...ok, angleDeg: 120 })).message).toMatch(/at most 90°, got 120° \(from 1° to 90°/);
   });
 });
 
@@ -172,7 +172,7 @@ describe('the shallowest lateral', () => {
     const spec = { header: { odMm: 323.85, wallMm: 9.525 }, branch: { odMm: 168.275, wallMm: 7.112 } };
     expect(() => solveBranch({ ...spec, angleDeg: 1 })).not.toThrow();
     const error = girthErrorOf(() => solveBranch({ ...spec, angleDeg: 0.999 }));
-    expect([error.code, error.field]).toEqual(['BAD_ANGLE', 'angleDeg']);
+    expect([error.code, error.field]).toEqual(['OUT_OF_RANGE', 'angleDeg']);
     expect(error.message).toMatch(/from 1° to 90°/);
   });
 });

@@ -70,7 +70,7 @@ export function maxPlateThicknessMm(given: ConeFrustum, diametersAt: DiameterSur
  * @param thicknessMm plate thickness, mm, ≥ 0 and below {@link maxPlateThicknessMm}.
  * @throws GirthError `NEGATIVE`/`NOT_A_NUMBER`/`NOT_FINITE` for a bad thickness,
  *   `WALL_TOO_THICK` (field `thicknessMm`) at or above {@link maxPlateThicknessMm},
- *   `BAD_OPTION` (field `diametersAt`) for an unknown surface.
+ *   `BAD_CHOICE` (field `diametersAt`) for an unknown surface.
  * @example makeConeSheet(frustum, 6, 'outside').normalShiftMm // -3
  */
 export function makeConeSheet(given: ConeFrustum, thicknessMm: number, diametersAt: DiameterSurface = 'outside'): ConeSheet {
@@ -88,7 +88,7 @@ export function makeConeSheet(given: ConeFrustum, thicknessMm: number, diameters
       break;
     default:
       throw new GirthError(
-        'BAD_OPTION',
+        'BAD_CHOICE',
         'diametersAt',
         `diametersAt: must be 'outside', 'inside' or 'mean', got ${String(diametersAt)}`,
         diametersAt,

@@ -1,9 +1,10 @@
 /**
  * Limits of miter elbows, each with its meaning.
  */
+import { MITER_WELDS } from '@girth/pipes';
 
 /** Most welds a miter elbow may have; past this the pieces get shorter than anyone cuts. */
-export const MAX_MITER_WELDS = 90;
+export const MAX_MITER_WELDS = MITER_WELDS.max;
 
 /**
  * ASME B31.3 para. 304.2.3: for multiple miters the cut angle (the change of

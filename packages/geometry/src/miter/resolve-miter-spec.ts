@@ -2,7 +2,7 @@
  * Checks a miter spec and resolves its choices (welds or pieces, radius in mm
  * or in nominal sizes).
  */
-import { GirthError, MM_PER_INCH as MM_PER_IN, requireFinite, requireInRange, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
+import { BEND_DEG, GirthError, requireWithin, MM_PER_INCH as MM_PER_IN, requireFinite, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
 import { fitRadiusMm, type CutFitSurface } from '../plane-cut/fit-surface.js';
 import { resolvePipeSection, type ResolvedPipeSection } from '../pipe-section.js';
 import { MAX_MITER_RADIUS_MM, MAX_MITER_WELDS } from './limits.js';
@@ -15,14 +15,14 @@ import type { MiterSpec, ResolvedMiterSpec } from './types.js';
  *
  * @throws GirthError
  *  - `OUT_OF_RANGE` (`bendDeg`) for a bend outside (0, 180];
- *  - `BAD_OPTION` (`welds`/`pieces`) when both or neither are given;
+ *  - `BAD_OPTION` (`welds`/`pieces`) when both are given, `MISSING_INPUT` (`welds`) when neither is;
  *  - `OUT_OF_RANGE` (`welds`/`pieces`) for a count that is not a whole number from 1
  *    weld (2 pieces) to 90 welds, or a single weld asked to turn 180°;
- *  - `BAD_OPTION` (`radiusMm`/`radiusNps`) when both or neither are given, or
+ *  - `BAD_OPTION` (`radiusMm`/`radiusNps`) when both are given (`MISSING_INPUT` on `radiusMm` when neither is), or
  *    `radiusNps` without `pipe.npsIn`;
  *  - `OUT_OF_RANGE` (`radiusMm`/`radiusNps`) for a radius below half the OD;
  *  - `NEGATIVE` (`tangentMm`); `NOT_A_NUMBER`/`NOT_FINITE` for NaN or Infinity
- *    anywhere; `BAD_OPTION` (`fitSurface`); the pipe errors of `resolvePipeSection`.
+ *    anywhere; `BAD_CHOICE` (`fitSurface`); the pipe errors of `resolvePipeSection`.
  * @example resolveMiterSpec({ pipe: { odMm: 323.9, wallMm: 9.53 }, bendDeg: 90, pieces: 4, radiusMm: 457.2 }).cutAngleDeg // 15
  */
 export function resolveMiterSpec(spec: MiterSpec): ResolvedMiterSpec {
@@ -30,7 +30,7 @@ export function resolveMiterSpec(spec: MiterSpec): ResolvedMiterSpec {
     throw new GirthError('EMPTY_INPUT', 'miter', 'miter: give the pipe, the bend and the number of welds or pieces', spec);
   }
   const pipe = resolvePipeSection(spec.pipe);
-  const bendDeg = requireInRange(spec.bendDeg, 'bendDeg', 0, 180, { minOpen: true, unit: 'degrees' });
+  const bendDeg = requireWithin(spec.bendDeg, 'bendDeg', BEND_DEG);
   const { welds, field: countField } = resolveWelds(spec);
   const cutAngleDeg = bendDeg / (2 * welds);
   if (!(cutAngleDeg < 90)) {
@@ -65,7 +65,7 @@ function resolveWelds(spec: MiterSpec): { welds: number; field: 'welds' | 'piece
     throw new GirthError('BAD_OPTION', 'pieces', 'pieces: give the number of welds or of pieces, not both (pieces = welds + 1)', spec.pieces);
   }
   if (!hasWelds && !hasPieces) {
-    throw new GirthError('BAD_OPTION', 'welds', 'welds: give the number of welds or of pieces (pieces = welds + 1)');
+    throw new GirthError('MISSING_INPUT', 'welds', 'welds: give the number of welds or of pieces (pieces = welds + 1)');
   }
   if (hasWelds) return { welds: requireInteger(spec.welds, 'welds', 1, MAX_MITER_WELDS), field: 'welds' };
   return { welds: requireInteger(spec.pieces, 'pieces', 2, MAX_MITER_WELDS + 1) - 1, field: 'pieces' };
@@ -79,7 +79,7 @@ function resolveRadiusMm(spec: MiterSpec, pipe: ResolvedPipeSection): number {
     throw new GirthError('BAD_OPTION', 'radiusNps', 'radiusNps: give the centreline radius as a length or as a multiple of the nominal size, not both', spec.radiusNps);
   }
   if (!hasMm && !hasNps) {
-    throw new GirthError('BAD_OPTION', 'radiusMm', 'radiusMm: give the centreline radius, as a length or as a multiple of the nominal pipe size');
+    throw new GirthError('MISSING_INPUT', 'radiusMm', 'radiusMm: give the centreline radius, as a length or as a multiple of the nominal pipe size');
   }
   if (hasMm) {
     const r = requireFinite(spec.radiusMm, 'radiusMm');
@@ -96,7 +96,7 @@ function resolveRadiusMm(spec: MiterSpec, pipe: ResolvedPipeSection): number {
   }
   const multiple = requirePositive(spec.radiusNps, 'radiusNps');
   if (pipe.npsIn === undefined) {
-    throw new GirthError('BAD_OPTION', 'radiusNps', 'radiusNps: a radius in nominal sizes needs the pipe\'s nominal size (pipe.npsIn); give radiusMm instead', spec.radiusNps);
+    throw new GirthError('BAD_OPTION', 'radiusNps', 'radiusNps: a radius in nominal sizes needs a pipe named by its nominal size (NPS); give the radius as a length instead', spec.radiusNps);
   }
   const r = multiple * pipe.npsIn * MM_PER_IN;
   requireRadiusWithinLimit(r, 'radiusNps', spec.radiusNps);

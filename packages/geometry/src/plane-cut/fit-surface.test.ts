@@ -14,6 +14,6 @@ describe('fitRadiusMm', () => {
     } catch (e) {
       err = e;
     }
-    expect(isGirthError(err) && `${err.code}:${err.field}`).toBe('BAD_OPTION:fitSurface');
+    expect(isGirthError(err) && `${err.code}:${err.field}`).toBe('BAD_CHOICE:fitSurface');
   });
 });

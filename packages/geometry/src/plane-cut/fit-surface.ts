@@ -19,7 +19,7 @@ export type CutFitSurface = 'od' | 'id';
 
 /**
  * The radius (mm) of the generator lines that meet the plane for a fit surface.
- * @throws GirthError `BAD_OPTION` for anything but `od` or `id`.
+ * @throws GirthError `BAD_CHOICE` for anything but `od` or `id`.
  * @example fitRadiusMm({ kind: 'pipe-section', odMm: 100, wallMm: 5, idMm: 90, label: 'x' }, 'id') // 45
  */
 export function fitRadiusMm(pipe: ResolvedPipeSection, fit: CutFitSurface, field = 'fitSurface'): number {
@@ -29,6 +29,6 @@ export function fitRadiusMm(pipe: ResolvedPipeSection, fit: CutFitSurface, field
     case 'id':
       return pipe.idMm / 2;
     default:
-      throw new GirthError('BAD_OPTION', field, `${field}: expected 'od' or 'id', got ${String(fit)}`, fit);
+      throw new GirthError('BAD_CHOICE', field, `${field}: expected 'od' or 'id', got ${String(fit)}`, fit);
   }
 }

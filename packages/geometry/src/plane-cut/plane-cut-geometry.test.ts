@@ -92,7 +92,7 @@ describe('planeCutGeometry', () => {
     expectGirthError(() => planeCutGeometry({ pipe, angleDeg: Number.POSITIVE_INFINITY }), 'NOT_FINITE', 'angleDeg');
     expectGirthError(() => planeCutGeometry({ pipe, angleDeg: 45, gapMm: -1 }), 'NEGATIVE', 'gapMm');
     expectGirthError(() => planeCutGeometry({ pipe, angleDeg: 45, gapMm: Number.NaN }), 'NOT_A_NUMBER', 'gapMm');
-    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: 45, fitSurface: 'bore' as never }), 'BAD_OPTION', 'fitSurface');
+    expectGirthError(() => planeCutGeometry({ pipe, angleDeg: 45, fitSurface: 'bore' as never }), 'BAD_CHOICE', 'fitSurface');
     expectGirthError(() => planeCutGeometry({ pipe: { odMm: 100, wallMm: 60 }, angleDeg: 45 }), 'WALL_TOO_THICK', 'pipe.wallMm');
   });
 });

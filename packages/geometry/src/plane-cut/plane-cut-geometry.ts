@@ -1,8 +1,7 @@
 /**
  * A pipe end cut to meet a plane: the generator bundle and the plane it meets.
  */
-import { requireInRange, requireNonNegative, type GirthWarning } from '@girth/pipes';
-import { MIN_JOINT_ANGLE_DEG } from '../tolerances.js';
+import { JOINT_ANGLE_DEG, requireNonNegative, requireWithin, type GirthWarning } from '@girth/pipes';
 import { intersectLine, offsetSurface } from '../surfaces/line-intersection.js';
 import type { GeneratorBundle, PlaneSurface } from '../types.js';
 import { addScaled, type Vec3 } from '../vec3.js';
@@ -31,7 +30,7 @@ const ORIGIN: Vec3 = [0, 0, 0];
  */
 export function planeCutGeometry(spec: PlaneCutSpec): PlaneCutGeometry {
   const pipe = resolvePipeSection(spec.pipe);
-  const angleDeg = requireInRange(spec.angleDeg, 'angleDeg', MIN_JOINT_ANGLE_DEG, 90, { unit: 'degrees' });
+  const angleDeg = requireWithin(spec.angleDeg, 'angleDeg', JOINT_ANGLE_DEG);
   const gapMm = spec.gapMm === undefined ? 0 : requireNonNegative(spec.gapMm, 'gapMm');
   const fitSurface: CutFitSurface = spec.fitSurface ?? 'od';
   const radius = fitRadiusMm(pipe, fitSurface);

@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { girthErrorOf } from '../test-support/girth-error-of.js';
 import { expectClose } from '../internal/test-support/expect-close.js';
+import { DIAMETER_MM, WALL_MM } from '../limits.js';
 import { pipeFromDimensions } from './from-dimensions.js';
 
 describe('pipeFromDimensions', () => {
@@ -14,11 +15,13 @@ describe('pipeFromDimensions', () => {
     expect(pipeFromDimensions(100, 3, '').label).toBe('100 x 3 mm');
   });
 
-  it('keeps ID = OD - 2 x wall and 0 < wall < OD/2 for any accepted pipe (fast-check)', () => {
+  it('keeps ID = OD - 2 x wall and 0 < wall < OD/2 for any accepted pipe (fast-check; OD and wall within DIAMETER_MM and WALL_MM)', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1e-3, max: 1e5, noNaN: true }), fc.double({ min: 1e-6, max: 0.4999, noNaN: true }), (od, share) => {
-        const p = pipeFromDimensions(od, od * share);
-        expect(p.idMm).toBe(od - 2 * od * share);
+      fc.property(fc.double({ min: DIAMETER_MM.min, max: DIAMETER_MM.max, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (od, t) => {
+        const wall = WALL_MM.min + (Math.min(od * 0.4999, WALL_MM.max) - WALL_MM.min) * t;
+        const p = pipeFromDimensions(od, wall);
+        expect(p.wallMm).toBe(wall);
+        expect(p.idMm).toBe(od - 2 * wall);
         expect(p.idMm).toBeGreaterThan(0);
       }),
     );
@@ -35,6 +38,12 @@ describe('pipeFromDimensions', () => {
       [406.4, -1, 'NEGATIVE', /wall/],
       [406.4, 203.2, 'WALL_TOO_THICK', /wall 203.2 mm is half the OD 406.4 mm or more/],
       [406.4, 300, 'WALL_TOO_THICK', /less than 203.2 mm/],
+      // Degenerate sizes (limits.ts): a 0.000001 mm pipe gave an all-zero template before these bounds.
+      [0.000001, 0.0000001, 'OUT_OF_RANGE', /OD of a custom pipe must be at least 3 mm, got 0\.000001 mm/],
+      [2.99, 0.5, 'OUT_OF_RANGE', /at least 3 mm, got 2\.99 mm/],
+      [20_000.4, 10, 'OUT_OF_RANGE', /at most 20000 mm, got 20000\.4 mm/],
+      [406.4, 0.05, 'OUT_OF_RANGE', /wall of a custom pipe must be at least 0\.1 mm, got 0\.05 mm \(.*foil/],
+      [3000, 600, 'OUT_OF_RANGE', /wall of a custom pipe must be at most 500 mm/],
     ];
     for (const [od, wall, code, message] of cases) {
       const e = girthErrorOf(() => pipeFromDimensions(od, wall));

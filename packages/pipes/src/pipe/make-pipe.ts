@@ -2,6 +2,7 @@
  * Building a {@link Pipe} from dimensions, with the checks every pipe passes.
  */
 import { GirthError } from '../errors.js';
+import { DIAMETER_MM, requireWithin, WALL_MM } from '../limits.js';
 import { requireFinite } from '../validate.js';
 import type { Pipe, PipeStandard } from './types.js';
 
@@ -47,12 +48,15 @@ export function positive(value: number, field: string, what: string, label: stri
 /**
  * The pipe, once its dimensions pass the checks.
  * @throws GirthError `NOT_A_NUMBER`/`NOT_FINITE` for NaN or infinite values,
- *   `NEGATIVE` for an OD or wall at or below zero, `WALL_TOO_THICK` for a wall
- *   of half the OD or more; all with `field`.
+ *   `NEGATIVE` for an OD or wall at or below zero, `OUT_OF_RANGE` for an OD
+ *   or wall outside `DIAMETER_MM` / `WALL_MM` (limits.ts), `WALL_TOO_THICK`
+ *   for a wall of half the OD or more; all with `field`.
  */
 export function makePipe(parts: PipeParts, field: string): Pipe {
   const odMm = positive(parts.odMm, field, 'OD', parts.label);
   const wallMm = positive(parts.wallMm, field, 'wall', parts.label);
+  requireWithin(odMm, field, { ...DIAMETER_MM, what: `the OD of ${parts.label}` });
+  requireWithin(wallMm, field, { ...WALL_MM, what: `the wall of ${parts.label}` });
   if (2 * wallMm >= odMm) {
     throw new GirthError(
       'WALL_TOO_THICK',

@@ -1,1 +1,2 @@
 export * from './girth-error-of.js';
+export * from './expect-close.js';

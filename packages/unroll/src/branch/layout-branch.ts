@@ -2,7 +2,7 @@
  * A branch joint from spec to templates: the branch cut (a wrap on the branch
  * OD) and the hole (marked on the header OD).
  */
-import { GirthError, requireInteger } from '@girth/pipes';
+import { DEFAULT_STATIONS, GirthError, requireWithin, STATIONS } from '@girth/pipes';
 import { solveBranch, type BranchPipeSection, type BranchSpec } from '@girth/geometry';
 import type { PipeUsed } from '../types.js';
 import { developWrap } from '../wrap/develop-wrap.js';
@@ -11,11 +11,11 @@ import { developHeaderHole } from './header-hole.js';
 import type { BranchLayout, LayoutBranchOptions } from './types.js';
 
 /** Stations around a branch when none are asked for: 16 of 22.5° (common practice). */
-export const DEFAULT_BRANCH_STATIONS = 16;
+export const DEFAULT_BRANCH_STATIONS = DEFAULT_STATIONS;
 /** Fewest stations a branch layout accepts. */
-export const MIN_BRANCH_STATIONS = 4;
+export const MIN_BRANCH_STATIONS = STATIONS.min;
 /** Most stations a branch layout accepts (one a degree). */
-export const MAX_BRANCH_STATIONS = 360;
+export const MAX_BRANCH_STATIONS = STATIONS.max;
 
 /**
  * Lays out a branch joint: `branch-cut`, a wrap template on the branch OD
@@ -43,7 +43,7 @@ export function layoutBranch(spec: BranchSpec, options: LayoutBranchOptions = {}
   const stations =
     options.stations === undefined
       ? DEFAULT_BRANCH_STATIONS
-      : requireInteger(options.stations, 'stations', MIN_BRANCH_STATIONS, MAX_BRANCH_STATIONS);
+      : requireWithin(options.stations, 'stations', STATIONS);
   const s = geometry.spec;
 
   const cutText = branchCutText(geometry, Math.PI * s.branch.odMm);

@@ -58,7 +58,7 @@ export interface AngleCheck {
  * one unit of arc is one degree (common practice).
  *
  * @param angleDeg the angle, degrees, in (0, 180) (between branch and header: (0, 90]).
- * @throws GirthError `BAD_ANGLE` (field `angleDeg`) outside (0, 180);
+ * @throws GirthError `OUT_OF_RANGE` (field `angleDeg`) outside (0, 180);
  *   `NEGATIVE` (field `runMm`, `chordRadiusMm` or `arcUnitMm`) for a length of zero or below,
  *   `OUT_OF_RANGE` for one over {@link MAX_CHECK_LENGTH_MM};
  *   `NOT_A_NUMBER` / `NOT_FINITE` naming the option.
@@ -70,7 +70,7 @@ export function angleCheck(angleDeg: number, options: AngleCheckOptions = {}): A
   }
   const a = requireFinite(angleDeg, 'angleDeg');
   if (!(a > 0 && a < 180)) {
-    throw new GirthError('BAD_ANGLE', 'angleDeg', `angleDeg: an angle to check must be between 0° and 180°, got ${a}°`, angleDeg);
+    throw new GirthError('OUT_OF_RANGE', 'angleDeg', `angleDeg: an angle to check must be between 0° and 180°, got ${a}°`, angleDeg);
   }
   const runMm = checkLength(options.runMm, 'runMm', DEFAULT_CHECK_LENGTH_MM);
   const chordRadiusMm = checkLength(options.chordRadiusMm, 'chordRadiusMm', DEFAULT_CHECK_LENGTH_MM);

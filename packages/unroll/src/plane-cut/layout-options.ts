@@ -1,7 +1,7 @@
 /**
  * Options shared by the cut layouts of this folder and the miter folder.
  */
-import { requireInteger } from '@girth/pipes';
+import { DEFAULT_STATIONS, requireWithin, STATIONS } from '@girth/pipes';
 
 /** Options of `layoutPlaneCut` and `layoutMiter`. */
 export interface CutLayoutOptions {
@@ -12,7 +12,7 @@ export interface CutLayoutOptions {
 }
 
 /** Fewest and most stations a cut layout accepts. */
-export const CUT_LAYOUT_STATIONS = { min: 4, max: 360, default: 16 } as const;
+export const CUT_LAYOUT_STATIONS = { min: STATIONS.min, max: STATIONS.max, default: DEFAULT_STATIONS } as const;
 
 /**
  * The station count of the options, checked.
@@ -20,5 +20,5 @@ export const CUT_LAYOUT_STATIONS = { min: 4, max: 360, default: 16 } as const;
  * @example resolveCutStations({}) // 16
  */
 export function resolveCutStations(options: CutLayoutOptions): number {
-  return requireInteger(options.stations ?? CUT_LAYOUT_STATIONS.default, 'stations', CUT_LAYOUT_STATIONS.min, CUT_LAYOUT_STATIONS.max);
+  return requireWithin(options.stations ?? DEFAULT_STATIONS, 'stations', STATIONS);
 }

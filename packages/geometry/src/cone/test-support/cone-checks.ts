@@ -7,11 +7,8 @@ import fc from 'fast-check';
 
 type V = readonly [number, number, number];
 
-/** Throws unless |actual − expected| ≤ tol (absolute); NaN never passes. */
-export function expectNear(actual: number, expected: number, tol: number, label: string): void {
-  const diff = Math.abs(actual - expected);
-  if (!(diff <= tol)) throw new Error(`${label}: got ${actual}, expected ${expected} ± ${tol} (off by ${diff})`);
-}
+/** Throws unless |actual − expected| ≤ tol (absolute); NaN never passes. The shared helper under its older name. */
+export { expectClose as expectNear } from '@girth/pipes/test-support';
 
 /** Distance from point p to the infinite line through a and b. */
 export function distanceToLine(p: V, a: V, b: V): number {
@@ -48,15 +45,19 @@ export function distanceToCone(p: V, R: number, r: number, L: number, e: number)
   return f((a + b) / 2);
 }
 
-/** A reducer of plausible shop size: large diameter 20..3000 mm, small 5..95 % of it, length 5..3000 mm. */
+/**
+ * A reducer of plausible shop size and within Girth's limits (`@girth/pipes`
+ * limits.ts): large diameter 20..3000 mm, small 5..95 % of it but at least
+ * 3 mm and at least 1.5 mm below the large end (REDUCER_STEP_MM is 1 mm), length 5..3000 mm but short enough for an included angle of at least
+ * 0.5° (L ≤ 100 (D − d), since tan 0.25° ≈ 1 / 229).
+ */
 export const reducerArb = fc
   .record({
     largeDiameterMm: fc.double({ min: 20, max: 3000, noNaN: true }),
     smallFraction: fc.double({ min: 0.05, max: 0.95, noNaN: true }),
     lengthMm: fc.double({ min: 5, max: 3000, noNaN: true }),
   })
-  .map((x) => ({
-    largeDiameterMm: x.largeDiameterMm,
-    smallDiameterMm: x.largeDiameterMm * x.smallFraction,
-    lengthMm: x.lengthMm,
-  }));
+  .map((x) => {
+    const smallDiameterMm = Math.min(Math.max(x.largeDiameterMm * x.smallFraction, 3), x.largeDiameterMm - 1.5);
+    return { largeDiameterMm: x.largeDiameterMm, smallDiameterMm, lengthMm: Math.min(x.lengthMm, 100 * (x.largeDiameterMm - smallDiameterMm)) };
+  });

@@ -4,17 +4,7 @@
  */
 import { expect } from 'vitest';
 
-/** Asserts |actual − expected| ≤ tol, naming `label` in the failure. */
-export function expectClose(actual: number, expected: number, tol: number, label: string): void {
-  const ok = Number.isFinite(actual) && Math.abs(actual - expected) <= tol;
-  if (!ok) expect.fail(`${label}: got ${actual}, expected ${expected} ± ${tol} (off by ${actual - expected})`);
-}
-
-/** Asserts two equal-length number lists agree element by element within tol. */
-export function expectAllClose(actual: readonly number[], expected: readonly number[], tol: number, label: string): void {
-  expect(actual.length, `${label}: length`).toBe(expected.length);
-  actual.forEach((a, i) => expectClose(a, expected[i] as number, tol, `${label}[${i}]`));
-}
+export { expectAllClose, expectClose } from '@girth/pipes/test-support';
 
 /** Asserts two 3D points agree within tol (Euclidean distance). */
 export function expectPointClose(actual: readonly number[], expected: readonly number[], tol: number, label: string): void {

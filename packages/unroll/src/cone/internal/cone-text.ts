@@ -2,7 +2,7 @@
  * Words on reducer templates: titles, notes and warnings (the exporters add
  * the caution, `CAUTION`).
  */
-import type { GirthWarning } from '@girth/pipes';
+import { formatLengthBoth, SHALLOW_CONE_WARN_DEG, type GirthWarning } from '@girth/pipes';
 import { angleFact, factLine, lengthFact, textLine, type FactLine } from '../../facts.js';
 import type { ResolvedCone } from './resolve-cone.js';
 
@@ -30,6 +30,16 @@ export function coneWarnings(cone: ResolvedCone): readonly GirthWarning[] {
       message:
         `An element leans ${deg(cone.maxInclinationDeg)} from the axis, more than ${STEEP_CONE_WARN_DEG}°: ` +
         'the junctions with the pipes need the design engineer to check them under the applicable code.',
+    });
+  }
+  if (cone.apexAngleDeg < SHALLOW_CONE_WARN_DEG) {
+    warnings.push({
+      code: 'SHALLOW_CONE',
+      field: 'lengthMm',
+      message:
+        `The included angle is only ${cone.apexAngleDeg.toFixed(3)}°, under ${SHALLOW_CONE_WARN_DEG}°: the pattern is a long, thin ring sector ` +
+        `(ends ${formatLengthBoth(cone.largeDiameterMm - cone.smallDiameterMm)} apart in diameter over ${formatLengthBoth(cone.lengthMm)}). ` +
+        'Check that a cone is meant and not a straight piece.',
     });
   }
   return warnings;

@@ -12,15 +12,28 @@ import {
   type ConeSheet,
   type DiameterSurface,
 } from '@girth/geometry';
-import { GirthError, requireInRange, requireInteger, requirePositive } from '@girth/pipes';
+import {
+  CHORD_TOLERANCE_MM,
+  CONE_APEX_ANGLE_DEG,
+  DEFAULT_STATIONS,
+  DIAMETER_MM,
+  GirthError,
+  PLATE_MM,
+  REDUCER_STEP_MM,
+  requireInteger,
+  requirePositive,
+  requireWithin,
+  STATIONS,
+} from '@girth/pipes';
+import { formatLengthBoth } from '@girth/pipes';
 import type { ConeLayoutOptions, ConeSpec, EccentricConeOptions, EccentricSeam } from '../types.js';
 
 /** Fewest stations around a cone: 4, one every 90°. */
-export const CONE_MIN_STATIONS = 4;
+export const CONE_MIN_STATIONS = STATIONS.min;
 /** Most stations around a cone: 360, one every degree. */
-export const CONE_MAX_STATIONS = 360;
+export const CONE_MAX_STATIONS = STATIONS.max;
 /** Stations when none are asked for: 16 of 22.5°, as the trade divides a girth (common practice). */
-export const CONE_DEFAULT_STATIONS = 16;
+export const CONE_DEFAULT_STATIONS = DEFAULT_STATIONS;
 
 /** A reducer ready to lay out. Lengths in mm. */
 export interface ResolvedCone {
@@ -55,11 +68,14 @@ const SURFACE_PREFIX: Readonly<Record<DiameterSurface, string>> = { outside: 'OD
  *
  * @throws GirthError naming the field and the limit: `BAD_JOB` (spec not an
  *   object), `NOT_A_NUMBER`/`NOT_FINITE`/`NEGATIVE` for bad numbers,
- *   `OUT_OF_RANGE` for a small diameter not below the large one (field
- *   `smallDiameterMm`), an apex angle outside its range, stations outside
- *   4..360 or segments outside 1..stations; `BAD_OPTION` for both or neither of
- *   length and angle, segments that do not divide the stations, an unknown
- *   `diametersAt` or label/formatter of the wrong type; `WALL_TOO_THICK` for a
+ *   `OUT_OF_RANGE` for a diameter outside `DIAMETER_MM`, a small diameter
+ *   not at least `REDUCER_STEP_MM` below the large one (field
+ *   `smallDiameterMm`), a plate outside `PLATE_MM`, an apex angle outside
+ *   `CONE_APEX_ANGLE_DEG` (field `lengthMm` when the length gave it; limits in `@girth/pipes`), stations outside
+ *   4..360 or segments outside 1..stations; `MISSING_INPUT` for neither length nor angle; `BAD_OPTION` for both of
+ *   length and angle, segments that do not divide the stations, or a
+ *   label/formatter of the wrong type; `BAD_CHOICE` for an unknown
+ *   `diametersAt`; `WALL_TOO_THICK` for a
  *   plate too thick for the small end (see `maxPlateThicknessMm`).
  * @example resolveCone({ largeDiameterMm: 219.1, smallDiameterMm: 168.3, lengthMm: 152, thicknessMm: 6 }, {}, 'concentric').lengthMm // 152
  */
@@ -67,16 +83,21 @@ export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: Co
   if (typeof spec !== 'object' || spec === null) {
     throw new GirthError('BAD_JOB', 'spec', 'spec: expected the reducer as an object with its diameters, length or angle, and plate thickness', spec);
   }
+  /** Lengths in error messages: mm first, inches in brackets (the describe step words templates; errors are not templates). */
+  const formatLength = formatLengthBoth;
   const largeDiameterMm = requirePositive(spec.largeDiameterMm, 'largeDiameterMm');
   const smallDiameterMm = requirePositive(spec.smallDiameterMm, 'smallDiameterMm');
+  requireWithin(largeDiameterMm, 'largeDiameterMm', { ...DIAMETER_MM, what: 'the large end' }, formatLength);
+  requireWithin(smallDiameterMm, 'smallDiameterMm', { ...DIAMETER_MM, what: 'the small end' }, formatLength);
   if (!(smallDiameterMm < largeDiameterMm)) {
     throw new GirthError(
       'OUT_OF_RANGE',
       'smallDiameterMm',
-      `smallDiameterMm: the small end (${smallDiameterMm} mm) must be smaller than the large end (${largeDiameterMm} mm)`,
+      `smallDiameterMm: the small end (${formatLength(smallDiameterMm)}) must be smaller than the large end (${formatLength(largeDiameterMm)})`,
       spec.smallDiameterMm,
     );
   }
+  requireWithin(largeDiameterMm - smallDiameterMm, 'smallDiameterMm', REDUCER_STEP_MM, formatLength);
   const diffMm = largeDiameterMm - smallDiameterMm;
   const hasLength = spec.lengthMm !== undefined;
   const hasAngle = spec.apexAngleDeg !== undefined;
@@ -84,21 +105,26 @@ export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: Co
     throw new GirthError('BAD_OPTION', 'apexAngleDeg', 'apexAngleDeg: give the length or the apex angle, not both', spec.apexAngleDeg);
   }
   if (!hasLength && !hasAngle) {
-    throw new GirthError('BAD_OPTION', 'lengthMm', 'lengthMm: give the length between the ends along the axis, or the apex angle', undefined);
+    throw new GirthError('MISSING_INPUT', 'lengthMm', 'lengthMm: give the length between the ends along the axis, or the apex angle', undefined);
   }
   const lengthMm = hasLength
     ? requirePositive(spec.lengthMm, 'lengthMm')
     : coneLengthFromApexAngle(diffMm, spec.apexAngleDeg as number, form);
   const apexAngleDeg = coneApexAngleDeg(diffMm, lengthMm, form);
+  requireWithin(apexAngleDeg, hasLength ? 'lengthMm' : 'apexAngleDeg', {
+    ...CONE_APEX_ANGLE_DEG,
+    what: hasLength ? `the included angle these ends and length give (${formatLength(diffMm)} difference over ${formatLength(lengthMm)})` : 'the included angle',
+  });
 
   const diametersAt = spec.diametersAt ?? 'outside';
   const R = largeDiameterMm / 2;
   const r = smallDiameterMm / 2;
   const given = makeConeFrustum({ largeRadiusMm: R, smallRadiusMm: r, lengthMm, offsetMm: form === 'eccentric' ? R - r : 0 });
   const sheet = makeConeSheet(given, spec.thicknessMm, diametersAt);
+  requireWithin(sheet.thicknessMm, 'thicknessMm', PLATE_MM, formatLength);
   const maxInclinationDeg = (elementInclinationRad(given, Math.PI) * 180) / Math.PI;
 
-  const stations = requireInteger(options.stations ?? CONE_DEFAULT_STATIONS, 'stations', CONE_MIN_STATIONS, CONE_MAX_STATIONS);
+  const stations = requireWithin(options.stations ?? CONE_DEFAULT_STATIONS, 'stations', STATIONS);
   const segments = requireInteger(options.segments ?? 1, 'segments', 1, stations);
   if (stations % segments !== 0) {
     throw new GirthError(
@@ -136,26 +162,20 @@ export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: Co
 /** Default chord tolerance of an eccentric cone's outline, mm: far inside what a fitter can mark or cut. */
 export const CONE_DEFAULT_CHORD_TOLERANCE_MM = 0.05;
 /** Smallest chord tolerance accepted, mm (1 µm; finer only multiplies points). */
-export const CONE_MIN_CHORD_TOLERANCE_MM = 0.001;
+export const CONE_MIN_CHORD_TOLERANCE_MM = CHORD_TOLERANCE_MM.min;
 /** Largest chord tolerance accepted, mm (a rough sketch; a cut needs far less). */
-export const CONE_MAX_CHORD_TOLERANCE_MM = 5;
+export const CONE_MAX_CHORD_TOLERANCE_MM = CHORD_TOLERANCE_MM.max;
 
 /**
  * The eccentric-only options, checked.
- * @throws GirthError `BAD_OPTION` for an unknown seam, `OUT_OF_RANGE` for a chord tolerance outside 0.001..5 mm.
+ * @throws GirthError `BAD_CHOICE` for an unknown seam, `OUT_OF_RANGE` for a chord tolerance outside 0.001..5 mm.
  * @example resolveEccentricOptions({}).seam // 'flat-side'
  */
 export function resolveEccentricOptions(options: EccentricConeOptions): { readonly seam: EccentricSeam; readonly chordToleranceMm: number } {
   const seam = options.seam ?? 'flat-side';
   if (seam !== 'flat-side' && seam !== 'opposite') {
-    throw new GirthError('BAD_OPTION', 'seam', `seam: must be 'flat-side' or 'opposite', got ${String(seam)}`, seam);
+    throw new GirthError('BAD_CHOICE', 'seam', `seam: must be 'flat-side' or 'opposite', got ${String(seam)}`, seam);
   }
-  const chordToleranceMm = requireInRange(
-    options.chordToleranceMm ?? CONE_DEFAULT_CHORD_TOLERANCE_MM,
-    'chordToleranceMm',
-    CONE_MIN_CHORD_TOLERANCE_MM,
-    CONE_MAX_CHORD_TOLERANCE_MM,
-    { unit: 'mm' },
-  );
+  const chordToleranceMm = requireWithin(options.chordToleranceMm ?? CONE_DEFAULT_CHORD_TOLERANCE_MM, 'chordToleranceMm', CHORD_TOLERANCE_MM);
   return { seam, chordToleranceMm };
 }
