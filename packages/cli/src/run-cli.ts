@@ -2,7 +2,6 @@
  * The `girth` command as a function: arguments in, text and files out, an exit
  * code back. `main.ts` only wires it to the process.
  */
-import { readFile } from 'node:fs/promises';
 import { GirthError, resolvePipe, type LengthUnit } from '@girth/pipes';
 import { choiceOption, parseOptions, stringOption } from './args.js';
 import { COMMON_OPTIONS, COMMON_OPTIONS_HELP, readCommonOptions } from './commands/common-options.js';
@@ -12,6 +11,8 @@ import type { CliIo } from './io.js';
 import { layoutJoint } from './joints/layout-joint.js';
 import { parseJob } from './job/schema.js';
 import { planJob } from './job/run-job.js';
+import { readJobFile } from './job/read-job-file.js';
+import { writeJobFolder } from './job/write-job-folder.js';
 import { planOutputs } from './outputs.js';
 import { layoutJson, layoutReportText, REPORT_CAUTION } from './report.js';
 import { writeFilesAtomically } from './write-files.js';
@@ -75,7 +76,7 @@ async function jointCommand(command: JointCommand, argv: readonly string[], io: 
   const settings = readCommonOptions(args);
   const result = layoutJoint(command.toInput(args), settings.ctx);
   const files = planOutputs(result, settings.request, settings.style);
-  const written = await writeFilesAtomically(files, { force: settings.force });
+  const written = await writeFilesAtomically(files, { force: settings.force, onNote: io.err });
   if (settings.json) {
     io.out(`${JSON.stringify(layoutJson(result, settings.ctx.units), null, 2)}\n`);
     io.err(`${REPORT_CAUTION}\n`);
@@ -100,22 +101,11 @@ async function runJobCommand(argv: readonly string[], io: CliIo): Promise<void> 
   if (extra.length > 0) throw new GirthError('BAD_OPTION', 'job', `run: one job file at a time; unexpected "${extra[0]}"`);
   const outDir = stringOption(args, 'out');
   if (outDir === undefined) throw new GirthError('BAD_OPTION', '--out', '--out: required, the folder for the templates, e.g. --out out/');
-  let text: string;
-  try {
-    text = await readFile(jobPath, 'utf8');
-  } catch {
-    throw new GirthError('BAD_JOB', 'job', `${jobPath}: cannot read the job file`, jobPath);
-  }
-  let data: unknown;
-  try {
-    data = JSON.parse(text);
-  } catch (error) {
-    throw new GirthError('BAD_JOB', 'job', `${jobPath}: not valid JSON (${error instanceof Error ? error.message : String(error)})`, jobPath);
-  }
-  const plan = planJob(parseJob(data), outDir);
-  const written = await writeFilesAtomically(plan.files, { force: args.values.force === true });
+  const job = parseJob(await readJobFile(jobPath));
+  const plan = planJob(job, outDir);
+  const written = await writeJobFolder(outDir, plan.files, { force: args.values.force === true, onNote: io.err, label: job.job });
   io.out(plan.summary);
-  io.err(`wrote ${written.length} files to ${outDir}\n`);
+  io.err(`wrote ${written.count} files to ${outDir}\n`);
 }
 
 async function pipeCommand(argv: readonly string[], io: CliIo): Promise<void> {

@@ -24,7 +24,9 @@ export type GirthErrorCode =
   | 'NO_INTERSECTION'
   | 'BAD_ANGLE'
   | 'BAD_OPTION'
-  | 'BAD_JOB';
+  | 'BAD_JOB'
+  | 'CANNOT_READ'
+  | 'CANNOT_WRITE';
 
 /**
  * A typed error for input Girth cannot accept.
