@@ -111,7 +111,7 @@ export async function writeFilesAtomically(files: readonly PlannedFile[], option
     current = files[0];
     if (moves.length > 1) journal = await writeJournal(moves);
   } catch (error) {
-    await Promise.all(moves.map((m) => rm(m.temp, { force: true })));
+    await Promise.all(moves.map((m) => rm(m.temp, { force: true }).catch(() => undefined)));
     await removeMadeFolders(made);
     throw current === undefined ? error : asFsError(error, 'write', fieldOf(current), current.path);
   }

@@ -78,7 +78,7 @@ export async function writeJobFolder(
   if (outDir.trim() === '') throw new GirthError('BAD_OPTION', field, `${field}: empty; give the folder for the templates, e.g. ${field} out/`, outDir);
   const dir = targetFolder(outDir, field);
   const rel = files.map((f) => {
-    const r = relative(dir, resolve(f.path));
+    const r = relative(resolve(outDir), resolve(f.path));
     if (r === '' || r.startsWith(`..${sep}`) || r === '..' || isAbsolute(r)) {
       throw new GirthError('BAD_OPTION', field, `${field}: ${f.path} lies outside ${outDir}`, f.path);
     }
