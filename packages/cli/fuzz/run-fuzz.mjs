@@ -31,7 +31,7 @@ for (let done = 0, part = 0; done < count; done += chunk, part++) {
   late.push(...res.late.map((p) => `seed ${seed + part} ${p}`));
   dxf.push(...res.keptDxf);
   ms += res.ms;
-  console.log(`  ${done + n} joints, ${Math.round(((done + n) / ms) * 1000)} joints/s so far`);
+  console.log(`  ${done + n} joints, ${Math.round(((done + n) / ms) * 1000)} joints/s so far; exceptions ${sum.exceptions}, NaN/Infinity ${sum.nonFinite}, unparsable ${sum.unparsable}, late refusals ${sum.lateRefusals}`);
 }
 
 let audited = 0;
