@@ -86,7 +86,7 @@ describe('girth run on the demo job', () => {
     expect(first.code, first.err).toBe(0);
     expect(first.err).toContain(`wrote 31 files to ${out}`);
     const expected = Object.keys(DEMO_TEMPLATES).flatMap((stem) => ['csv', 'dxf', 'svg'].map((ext) => `${stem}.${ext}`));
-    expect(listFiles(out)).toEqual([...expected, 'summary.txt'].sort());
+    expect(listFiles(out)).toEqual([...expected, 'summary.txt', '.girth-set'].sort());
     expect(leftoverTempFiles(tmp)).toEqual([]);
     expect(listFiles(tmp).every((f) => f.startsWith('demo-out/'))).toBe(true);
   });
@@ -157,7 +157,7 @@ describe('girth run on the demo job', () => {
     const again = girth(['run', DEMO_JOB, '--out', out], tmp);
     expect(again.code).toBe(2);
     expect(again.out).toBe('');
-    expect(again.err).toContain('already exists');
+    expect(again.err).toContain('already holds files');
     expect(again.err).toContain('--force');
     expect(snapshotDir(out)).toEqual(before);
 

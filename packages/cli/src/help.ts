@@ -38,7 +38,11 @@ Example:
 Writes, for each piece, its templates as SVG and DXF and its station tables as
 CSV (the job's "outputs" list may narrow that), named after the piece label,
 and one summary.txt with the summary table and every ordinate table. Nothing is
-written if any piece is in error. Existing files are kept unless --force.
+written if any piece is in error. DIR is the job's own folder: it appears
+complete at once (built beside it, then moved in). An existing DIR that holds
+files is kept unless --force, which replaces the whole set; a folder holding
+files Girth did not write is never replaced. A run that was killed is repaired
+by the next run into DIR, which says what it did.
 
 A job file:
   { "job": "Job 4471 - filter gallery", "units": "in", "stations": 16,

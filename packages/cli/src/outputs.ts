@@ -8,6 +8,7 @@ import type { LengthUnit } from '@girth/pipes';
 import { templateToSvg } from '@girth/svg';
 import { stationTableCsv, type TableLengthFormat } from '@girth/table';
 import type { LayoutResult, Template } from '@girth/unroll';
+import { checkOutputPath } from './output-paths.js';
 import type { PlannedFile } from './write-files.js';
 
 /** Where to write each kind of output; absent kinds are not written. */
@@ -39,19 +40,26 @@ export function templatePath(path: string, template: Template, templateCount: nu
 }
 
 /**
- * Every file a layout produces for the request, content included.
+ * Every file a layout produces for the request, content included, each
+ * tagged with the option that named it.
+ * @throws GirthError `BAD_OPTION` when a requested path is empty, a folder,
+ *   or ends in another format's extension (see {@link checkOutputPath}).
  * @example planOutputs(result, { svg: 'tee.svg' }, style).map((f) => f.path)
  */
 export function planOutputs(result: LayoutResult, request: OutputRequest, style: OutputStyle): readonly PlannedFile[] {
+  if (request.svg !== undefined) checkOutputPath('--svg', '.svg', request.svg);
+  if (request.dxf !== undefined) checkOutputPath('--dxf', '.dxf', request.dxf);
+  if (request.csv !== undefined) checkOutputPath('--csv', '.csv', request.csv);
   const files: PlannedFile[] = [];
   const count = result.templates.length;
   const labels = { ...(style.job !== undefined ? { job: style.job } : {}), ...(style.piece !== undefined ? { piece: style.piece } : {}) };
   for (const template of result.templates) {
     if (request.svg !== undefined) {
-      files.push({ path: templatePath(request.svg, template, count), content: templateToSvg(template, { sheetUnits: style.units, ...labels }) });
+      files.push({ option: '--svg', path: templatePath(request.svg, template, count), content: templateToSvg(template, { sheetUnits: style.units, ...labels }) });
     }
     if (request.dxf !== undefined) {
       files.push({
+        option: '--dxf',
         path: templatePath(request.dxf, template, count),
         content: templateToDxf(template, { units: style.units, version: style.dxfVersion, ...labels }),
       });
@@ -59,7 +67,7 @@ export function planOutputs(result: LayoutResult, request: OutputRequest, style:
   }
   if (request.csv !== undefined) {
     for (const template of result.templates) {
-      files.push({ path: templatePath(request.csv, template, count), content: stationTableCsv(template, { format: style.tableFormat, fraction: style.fraction }) });
+      files.push({ option: '--csv', path: templatePath(request.csv, template, count), content: stationTableCsv(template, { format: style.tableFormat, fraction: style.fraction }) });
     }
   }
   return files;

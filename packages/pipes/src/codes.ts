@@ -44,4 +44,6 @@ export const ERROR_CODES: Readonly<Record<GirthErrorCode, string>> = {
   BAD_TEXT: 'a label with control characters or too long to print',
   BAD_OPTION: 'a command-line option that does not exist, is given twice, lacks its value, or does nothing with the others given; options of a library call that cannot go together',
   BAD_JOB: 'a job file that cannot be read, is not JSON, or has a key a job or piece does not take',
+  CANNOT_READ: 'a file that cannot be read (missing, no permission, a FIFO, too large), naming the option or path',
+  CANNOT_WRITE: 'a file or folder that cannot be written (read-only, no permission, disk full, name too long), naming the option and path',
 };

@@ -30,7 +30,9 @@ export type GirthErrorCode =
   | 'BAD_CHOICE'
   | 'BAD_TEXT'
   | 'BAD_OPTION'
-  | 'BAD_JOB';
+  | 'BAD_JOB'
+  | 'CANNOT_READ'
+  | 'CANNOT_WRITE';
 
 /**
  * A typed error for input Girth cannot accept.

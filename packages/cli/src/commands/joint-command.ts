@@ -22,7 +22,7 @@ export async function runJointCommand(joint: JointDefinition<JointInput>, args: 
   const settings = readCommonOptions(args);
   const result = layoutJoint(joint.fromOptions(args), settings.ctx);
   const files = planOutputs(result, settings.request, settings.style);
-  const written = await writeFilesAtomically(files, { force: settings.force });
+  const written = await writeFilesAtomically(files, { force: settings.force, onNote: io.err });
   if (settings.json) {
     io.out(`${JSON.stringify(toResultJson(result, { units: settings.ctx.units }), null, 2)}\n`);
     io.err(`${REPORT_CAUTION}\n`);

@@ -167,7 +167,7 @@ describe('girth run', () => {
   it('a missing job file or --out exits 2', async () => {
     const missing = await runCaptured(['run', join(tmp, 'none.json'), '--out', join(tmp, 'out')]);
     expect(missing.code).toBe(2);
-    expect(missing.err).toContain('cannot read the job file');
+    expect(missing.err).toContain(`job: cannot read ${join(tmp, 'none.json')}: no such file or folder`);
     const noOut = await runCaptured(['run', DEMO_JOB]);
     expect(noOut.code).toBe(2);
     expect(noOut.err).toContain('--out');
@@ -179,13 +179,15 @@ describe('girth run', () => {
     const first = await runCaptured(['run', DEMO_JOB, '--out', out]);
     expect(first.code, first.err).toBe(0);
     expect(first.err).toContain(`wrote 31 files to ${out}`);
-    expect(listFiles(out)).toHaveLength(31);
+    // The 31 planned files and the marker that makes the folder one set.
+    expect(listFiles(out)).toHaveLength(32);
+    expect(listFiles(out)).toContain('.girth-set');
     expect(readFileSync(join(out, 'summary.txt'), 'utf8')).toBe(first.out);
     const before = snapshotDir(out);
 
     const again = await runCaptured(['run', DEMO_JOB, '--out', out]);
     expect(again.code).toBe(2);
-    expect(again.err).toContain('already exists');
+    expect(again.err).toContain('already holds files; use --force');
     expect(snapshotDir(out)).toEqual(before);
 
     // One file removed: still nothing written while any other exists.
@@ -197,7 +199,8 @@ describe('girth run', () => {
 
     const forced = await runCaptured(['run', DEMO_JOB, '--out', out, '--force']);
     expect(forced.code, forced.err).toBe(0);
-    expect(listFiles(out)).toHaveLength(31);
+    expect(listFiles(out)).toHaveLength(32);
+    expect(listFiles(out)).toContain(gone);
     expect(leftoverTempFiles(tmp)).toEqual([]);
   });
 

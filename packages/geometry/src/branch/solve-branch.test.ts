@@ -55,6 +55,28 @@ describe('solveBranch', () => {
     expectClose([...b.axisPoint], [0, 20, 0], 0, 'axis point');
   });
 
+  it('sets up the same frame at 30°, where sin and cos differ (45° would hide a swap)', () => {
+    // Invariants of DESIGN.md's frame, stated without the library's formulas:
+    // the axis b makes the joint's angle with the header axis x; the heel
+    // direction u is a unit vector square to b in the plane of both axes, on
+    // the obtuse side (toward −x); the side direction is +y.
+    const g = solveBranch({ header: NPS12, branch: NPS6, angleDeg: 30 });
+    const b = g.branchAxisDirection;
+    const u = g.cutBundle.heelDirection;
+    expect(Math.acos(b[0]) / (Math.PI / 180)).toBeCloseTo(30, 12);
+    expect(b[2]).toBeGreaterThan(0); // away from the header
+    expect(b[1]).toBe(0);
+    expect(Math.hypot(...u)).toBeCloseTo(1, 15);
+    expect(u[0] * b[0] + u[1] * b[1] + u[2] * b[2]).toBeCloseTo(0, 15);
+    expect(u[1]).toBe(0);
+    expect(u[0]).toBeLessThan(0);
+    expectClose([...g.cutBundle.axisDirection], [-b[0], -b[1], -b[2]], 1e-15, 'axis toward header');
+    // Leaning toward +x, the branch meets the header at its heel (phi = 0) nearer −x than at its toe (phi = 180°).
+    const heel = hitGenerator(g.cutBundle, g.cutHost, 0)!.point;
+    const toe = hitGenerator(g.cutBundle, g.cutHost, Math.PI)!.point;
+    expect(heel[0]).toBeLessThan(toe[0]);
+  });
+
   it('gives the saddle depth of two cylinders crossing at 90°', () => {
     // MathWorld, "Cylinder-Cylinder Intersection": h(phi) = R − sqrt(R² − r² sin² phi) below the header top.
     const g = solveBranch({ header: NPS12, branch: NPS6 });

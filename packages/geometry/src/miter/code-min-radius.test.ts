@@ -10,6 +10,17 @@ describe('ASME B31.3 eq. (5) minimum miter radius (recalled, not checked against
     expectClose(miterRadiusConstantAMm(24), 46, 1e-12, 'A at 24 mm');
   });
 
+  it('changes rule exactly at T = 22 mm and just above T = 13 mm (recalled boundaries)', () => {
+    // 13 < T < 22: A = 2T; T >= 22: A = 2T/3 + 30. The two rules give 44 and
+    // 44.667 mm at 22 mm, so the boundary itself decides which applies.
+    expectClose(miterRadiusConstantAMm(22), (2 * 22) / 3 + 30, 1e-12, 'A at 22 mm');
+    expectClose(miterRadiusConstantAMm(21.99), 2 * 21.99, 1e-12, 'A just below 22 mm');
+    expectClose(miterRadiusConstantAMm(22.01), (2 * 22.01) / 3 + 30, 1e-12, 'A just above 22 mm');
+    expectClose(miterRadiusConstantAMm(13.01), 26.02, 1e-12, 'A just above 13 mm');
+    // R1 at the boundary: A / tan 11.25° + D/2 for a 22 mm wall on a 610 mm OD (NPS 24, ASME B36.10M, recalled).
+    expectClose(codeMinMiterRadiusMm(609.6, 22, 11.25), ((2 * 22) / 3 + 30) / Math.tan((11.25 * Math.PI) / 180) + 304.8, 1e-9, 'R1 at T = 22 mm');
+  });
+
   it('gives R1 = A / tan(theta) + D/2 (recalled)', () => {
     // NPS 12 STD: OD 12.75 in = 323.85 mm, wall 0.375 in = 9.525 mm (ASME B36.10M, recalled).
     // theta 15°: 25 / tan 15° = 93.30127019 mm; + 161.925 mm.

@@ -243,6 +243,31 @@ describe('layoutBranch', () => {
     expectClose(centre[1]!, [0, R], 1e-9, 'centre mark');
   });
 
+  it('marks the hole centre of an OFFSET lateral at 60° where its axis pierces the header OD', () => {
+    // Right-triangle geometry: the branch axis runs in the plane y = e and
+    // pierces the header OD at height z = sqrt(R² − e²), which lies
+    // R · asin(e / R) round the girth from the top line (arc length) and
+    // z · cot 60° along the header from where the axis crosses it. 60° (not
+    // 45°) so a sin/cos swap shows; e = 2 in toward +y (README: offsets move
+    // the branch toward +y, and hole girth grows toward +y).
+    const e = 2 * IN;
+    const layout = layoutBranch({ header: NPS12, branch: NPS6, angleDeg: 60, offsetMm: e });
+    const hole = layout.templates[1];
+    const R = NPS12.odMm / 2;
+    const z = Math.sqrt(R * R - e * e);
+    const expected = [R * Math.asin(e / R), z / Math.tan(60 * DEG)];
+    const arms = hole.marks.filter((m) => m.kind === 'segment').slice(2);
+    expect(arms).toHaveLength(2);
+    for (const m of arms) {
+      if (m.kind !== 'segment') continue;
+      expectClose([(m.from[0] + m.to[0]) / 2, (m.from[1] + m.to[1]) / 2], expected, 1e-9, 'offset centre mark');
+    }
+    // The mark is a cross: one arm along the girth, one along the header.
+    const [a, b] = arms as { from: Point2; to: Point2 }[];
+    expect(a!.from[1]).toBeCloseTo(a!.to[1], 12);
+    expect(b!.from[0]).toBeCloseTo(b!.to[0], 12);
+  });
+
   it('rejects bad stations and options, and passes on the joint errors', () => {
     const ok: BranchSpec = { header: NPS12, branch: NPS6 };
     const codeOf = (f: () => unknown): string | undefined => {
