@@ -1,7 +1,6 @@
 /**
  * Axis-aligned boxes in mm, and the boxes of the parts of a template (y-up).
  */
-import makerjs from 'makerjs';
 import type { PathPart, Point2 } from '@girth/unroll';
 import { arcSweepDeg } from '../check-template.js';
 
@@ -56,7 +55,9 @@ export function pointsBox(points: readonly Point2[]): Box {
 }
 
 /**
- * The box of a path part, mm; an arc's box includes the quadrant points it passes (measured by makerjs).
+ * The box of a path part, mm. An arc (counter-clockwise from `startDeg` to
+ * `endDeg`, y-up) spans its two end points and every quadrant point (0°, 90°,
+ * 180°, 270°) its sweep passes; a sweep of 360° or more is the full circle.
  *
  * @example partBox({ kind: 'arc', center: [0, 0], radiusMm: 10, startDeg: 0, endDeg: 180 }) // { minX: -10, minY: 0, maxX: 10, maxY: 10 }
  */
@@ -66,18 +67,22 @@ export function partBox(part: PathPart): Box {
       return pointsBox(part.points);
     case 'segment':
       return pointsBox([part.from, part.to]);
-    case 'arc': {
-      const full = arcSweepDeg(part.startDeg, part.endDeg) === 360;
-      const path = new makerjs.paths.Arc(
-        [part.center[0], part.center[1]],
-        part.radiusMm,
-        full ? 0 : part.startDeg,
-        full ? 360 : part.endDeg,
-      );
-      const m = makerjs.measure.pathExtents(path);
-      const [minX, minY] = m.low as [number, number];
-      const [maxX, maxY] = m.high as [number, number];
-      return { minX, minY, maxX, maxY };
-    }
+    case 'arc':
+      return pointsBox(arcExtremePoints(part.center, part.radiusMm, part.startDeg, part.endDeg));
   }
+}
+
+/** The end points of an arc and the quadrant points its sweep passes. */
+function arcExtremePoints(center: Point2, radiusMm: number, startDeg: number, endDeg: number): Point2[] {
+  const sweepDeg = arcSweepDeg(startDeg, endDeg);
+  const at = (deg: number): Point2 => {
+    const rad = (deg * Math.PI) / 180;
+    return [center[0] + radiusMm * Math.cos(rad), center[1] + radiusMm * Math.sin(rad)];
+  };
+  const points: Point2[] = [at(startDeg), at(startDeg + sweepDeg)];
+  for (const quadrantDeg of [0, 90, 180, 270]) {
+    const fromStartDeg = (((quadrantDeg - startDeg) % 360) + 360) % 360;
+    if (fromStartDeg <= sweepDeg) points.push(at(quadrantDeg));
+  }
+  return points;
 }
