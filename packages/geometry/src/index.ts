@@ -1,10 +1,70 @@
-export * from './vec3.js';
-export * from './types.js';
-export * from './tolerances.js';
-export * from './generators.js';
-export * from './pipe-section.js';
-export * from './surfaces/line-intersection.js';
-export * from './cone/index.js';
-export * from './branch/index.js';
-export * from './plane-cut/index.js';
-export * from './miter/index.js';
+/**
+ * @girth/geometry: the 3D geometry of pipe joints. Host surfaces (header
+ * cylinders, weld and cut planes, cones), the generator lines of the cut pipe,
+ * and the exact intersection of each with its host, for branches, plane cuts,
+ * miters and cone reducers. Millimetres and radians throughout.
+ *
+ * The public surface is this list, by name: modules inside may move or split
+ * without changing it. Anything not named here is internal.
+ *
+ * @packageDocumentation
+ */
+
+export { add, sub, scale, addScaled, dot, cross, norm, normalize } from './vec3.js';
+export type { Vec3 } from './vec3.js';
+export type { Line3, CylinderSurface, PlaneSurface, HostSurface, GeneratorBundle } from './types.js';
+export { DEFAULT_CHORD_TOLERANCE_MM, SHALLOW_LATERAL_WARN_DEG, MIN_JOINT_ANGLE_DEG } from './tolerances.js';
+export { generatorLine, hitGenerator } from './generators.js';
+export type { GeneratorHit } from './generators.js';
+export { resolvePipeSection } from './pipe-section.js';
+export type { PipeSection, ResolvedPipeSection } from './pipe-section.js';
+export { intersectLine, offsetSurface, surfaceNormal } from './surfaces/line-intersection.js';
+export type { ConeFrustum, DiameterSurface, ConeSheet, ConeElement, ConeForm } from './cone/types.js';
+export {
+  makeConeFrustum,
+  frustumElement,
+  frustumApex,
+  frustumNormal,
+  elementInclinationRad,
+} from './cone/frustum.js';
+export type { ConeFrustumInput } from './cone/frustum.js';
+export { coneLengthFromApexAngle, coneApexAngleDeg } from './cone/apex-angle.js';
+export { maxEndShiftFactor, maxPlateThicknessMm, makeConeSheet, sheetElement } from './cone/sheet.js';
+export type {
+  BranchFit,
+  PipeFace,
+  BranchContact,
+  BranchSpec,
+  BranchPipeSection,
+  ResolvedBranchSpec,
+  BranchGeometry,
+} from './branch/types.js';
+export { resolveBranchSpec, DEFAULT_BRANCH_ANGLE_DEG, FIT_CONTACT } from './branch/resolve-branch-spec.js';
+export { branchAxisDirection, branchBundle } from './branch/branch-frame.js';
+export { grazingPhisRad } from './branch/grazing-phis.js';
+export { branchWarnings, REINFORCEMENT_RULES_MIN_ANGLE_DEG } from './branch/branch-warnings.js';
+export type { BranchWarningCode } from './branch/branch-warnings.js';
+export { solveBranch } from './branch/solve-branch.js';
+export { fitRadiusMm } from './plane-cut/fit-surface.js';
+export type { CutFitSurface } from './plane-cut/fit-surface.js';
+export type { PlaneCutSpec, PlaneCutGeometry } from './plane-cut/types.js';
+export { SHALLOW_PLANE_CUT_WARN_DEG } from './plane-cut/limits.js';
+export { planeCutGeometry } from './plane-cut/plane-cut-geometry.js';
+export type {
+  MiterSpec,
+  ResolvedMiterSpec,
+  MiterCutEnd,
+  MiterPiece3d,
+  MiterGeometry,
+  MiterPieceCut,
+  MiterStockCut,
+  MiterStockPlan,
+  MiterCutList,
+} from './miter/types.js';
+export { MAX_MITER_WELDS, B31_3_MULTIPLE_MITER_MAX_CUT_DEG, MAX_MITER_RADIUS_MM } from './miter/limits.js';
+export { miterCutAngleDeg } from './miter/cut-angle.js';
+export { miterRadiusConstantAMm, codeMinMiterRadiusMm } from './miter/code-min-radius.js';
+export { resolveMiterSpec } from './miter/resolve-miter-spec.js';
+export { miterWarnings } from './miter/miter-warnings.js';
+export { miterGeometry } from './miter/elbow-geometry.js';
+export { miterCutList } from './miter/cut-list.js';

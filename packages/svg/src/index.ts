@@ -1,6 +1,23 @@
-export * from './types.js';
-export * from './options.js';
-export * from './check-template.js';
-export * from './print-note.js';
+/**
+ * @girth/svg: draws a Girth `Template` as an SVG sheet at true physical size
+ * (`templateToSvg`), with a title block, the caution and a calibration bar.
+ *
+ * The public surface is this list, by name: modules inside may move or split
+ * without changing it. Anything not named here is internal.
+ *
+ * @packageDocumentation
+ */
+
 export { templateToSvg } from './template-to-svg.js';
 export { GIRTH_SVG_NAMESPACE } from './sheet-document.js';
+export type { SheetUnits, SvgOptions, ResolvedSvgOptions } from './types.js';
+export {
+  resolveSvgOptions,
+  DEFAULT_MARGIN_MM,
+  DEFAULT_OVERLAP_MM,
+  MAX_MARGIN_MM,
+  MAX_OVERLAP_MM,
+  MAX_LABEL_CHARS,
+} from './options.js';
+export { checkTemplate, MAX_COORD_MM, MAX_LABEL_HEIGHT_MM } from './check-template.js';
+export { PRINT_NOTE } from './print-note.js';

@@ -1,8 +1,73 @@
-export * from './types.js';
-export * from './caution.js';
-export * from './wrap/sample-cut.js';
-export * from './wrap/develop-wrap.js';
-export * from './cone/index.js';
-export * from './branch/index.js';
-export * from './plane-cut/index.js';
-export * from './miter/index.js';
+/**
+ * @girth/unroll: develops each joint's cut onto the flat. `layoutBranch`,
+ * `layoutPlaneCut`, `layoutMiter`, `layoutConcentricCone` and
+ * `layoutEccentricCone` return a `LayoutResult` of `Template`s (contours,
+ * square line, station lines, labels, the station table) that the svg, dxf and
+ * table packages draw and print. `sampleCut` and `developWrap` are the steps
+ * every wrap is made with, for a developer adding a joint of their own.
+ *
+ * The public surface is this list, by name: modules inside may move or split
+ * without changing it. Anything not named here is internal.
+ *
+ * @packageDocumentation
+ */
+
+export type {
+  Point2,
+  Polyline2,
+  Arc2,
+  Segment2,
+  PathPart,
+  StationLine,
+  TemplateLabel,
+  TemplateKind,
+  StationColumn,
+  StationRow,
+  Template,
+  PipeUsed,
+  LayoutResult,
+} from './types.js';
+export { CAUTION } from './caution.js';
+export { sampleCut, MAX_SAMPLE_STATIONS, MIN_CHORD_TOLERANCE_MM } from './wrap/sample-cut.js';
+export type { CutSamples, SampleCutOptions } from './wrap/sample-cut.js';
+export { developWrap } from './wrap/develop-wrap.js';
+export type { WrapLabel, DevelopWrapInput } from './wrap/develop-wrap.js';
+export {
+  CONE_DEFAULT_STATIONS,
+  CONE_MAX_STATIONS,
+  CONE_MIN_STATIONS,
+  CONE_DEFAULT_CHORD_TOLERANCE_MM,
+  CONE_MAX_CHORD_TOLERANCE_MM,
+  CONE_MIN_CHORD_TOLERANCE_MM,
+} from './cone/internal/resolve-cone.js';
+export { STEEP_CONE_WARN_DEG } from './cone/internal/cone-text.js';
+export type {
+  ConeSpec,
+  EccentricConeSpec,
+  ConeLayoutOptions,
+  EccentricSeam,
+  EccentricConeOptions,
+  ConeEndInfo,
+  ConePiece,
+  ConcentricConePiece,
+  ConePattern,
+  ConeLayoutBase,
+  ConcentricConeLayout,
+  EccentricConeLayout,
+  ConeLayout,
+} from './cone/types.js';
+export { layoutConcentricCone } from './cone/concentric.js';
+export { layoutEccentricCone } from './cone/eccentric.js';
+export type { LayoutBranchOptions, BranchLayout } from './branch/types.js';
+export {
+  layoutBranch,
+  DEFAULT_BRANCH_STATIONS,
+  MIN_BRANCH_STATIONS,
+  MAX_BRANCH_STATIONS,
+} from './branch/layout-branch.js';
+export { CUT_LAYOUT_STATIONS } from './plane-cut/layout-options.js';
+export type { CutLayoutOptions } from './plane-cut/layout-options.js';
+export type { PlaneCutLayout } from './plane-cut/types.js';
+export { layoutPlaneCut } from './plane-cut/layout-plane-cut.js';
+export type { MiterLayout } from './miter/types.js';
+export { layoutMiter } from './miter/layout-miter.js';
