@@ -9,6 +9,7 @@
  * without changing it. Anything not named here is internal.
  *
  * @packageDocumentation
+ * @module girth
  */
 
 export { runCli, GIRTH_VERSION, PIPE_CAUTION, EXIT } from './run-cli.js';

@@ -8,12 +8,13 @@
  * without changing it. Anything not named here is internal.
  *
  * @packageDocumentation
+ * @module @girth/geometry
  */
 
 export { add, sub, scale, addScaled, dot, cross, norm, normalize } from './vec3.js';
 export type { Vec3 } from './vec3.js';
 export type { Line3, CylinderSurface, PlaneSurface, HostSurface, GeneratorBundle } from './types.js';
-export { DEFAULT_CHORD_TOLERANCE_MM, SHALLOW_LATERAL_WARN_DEG, MIN_JOINT_ANGLE_DEG } from './tolerances.js';
+export { TANGENCY_REL_EPS, DEFAULT_CHORD_TOLERANCE_MM, SHALLOW_LATERAL_WARN_DEG, MIN_JOINT_ANGLE_DEG } from './tolerances.js';
 export { generatorLine, hitGenerator } from './generators.js';
 export type { GeneratorHit } from './generators.js';
 export { resolvePipeSection } from './pipe-section.js';

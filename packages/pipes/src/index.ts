@@ -7,6 +7,7 @@
  * without changing it. Anything not named here is internal.
  *
  * @packageDocumentation
+ * @module @girth/pipes
  */
 
 // Errors and warnings

@@ -10,6 +10,7 @@
  * without changing it. Anything not named here is internal.
  *
  * @packageDocumentation
+ * @module @girth/unroll
  */
 
 export type {
