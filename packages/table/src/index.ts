@@ -6,6 +6,7 @@
  * without changing it. Anything not named here is internal.
  *
  * @packageDocumentation
+ * @module @girth/table
  */
 
 export type {
