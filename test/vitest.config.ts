@@ -10,6 +10,6 @@ export default defineConfig({
   ...shared,
   test: {
     ...shared.test,
-    include: ['acceptance/**/*.test.ts', 'oracle/**/*.test.ts', 'support/**/*.test.ts'],
+    include: ['acceptance/**/*.test.ts', 'oracle/**/*.test.ts', 'support/**/*.test.ts', 'packaging/**/*.test.ts'],
   },
 });

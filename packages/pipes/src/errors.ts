@@ -10,28 +10,51 @@
  * ones freely.
  */
 export type GirthErrorCode =
+  /** Nothing was given where a value is needed (an empty name, length or list). */
   | 'EMPTY_INPUT'
+  /** A required option, key or value is missing. */
   | 'MISSING_INPUT'
+  /** A number was expected and the text or value is not one. */
   | 'NOT_A_NUMBER'
+  /** A number is infinite or NaN where a finite one is needed. */
   | 'NOT_FINITE'
+  /** A length or count is below zero where it cannot be. */
   | 'NEGATIVE'
+  /** A number lies outside its stated limits; the message names them. */
   | 'OUT_OF_RANGE'
+  /** A fraction has a zero denominator (`1/0`). */
   | 'DIVIDE_BY_ZERO'
+  /** A unit name Girth does not read. */
   | 'UNKNOWN_UNIT'
+  /** A length written in a form Girth cannot read. */
   | 'BAD_LENGTH'
+  /** Text that is not a pipe name in any form Girth reads. */
   | 'BAD_PIPE_NAME'
+  /** A nominal size (NPS or DN) that no catalog table lists. */
   | 'UNKNOWN_SIZE'
+  /** A schedule or weight class that the size's table does not list. */
   | 'UNKNOWN_SCHEDULE'
+  /** A pipe named without a wall where the wall must be known. */
   | 'MISSING_SCHEDULE'
+  /** A wall that leaves no bore, or is too thick for the pipe or plate. */
   | 'WALL_TOO_THICK'
+  /** A branch larger than its header allows. */
   | 'BRANCH_TOO_LARGE'
+  /** A branch offset so far that the branch misses the header. */
   | 'OFFSET_MISSES'
+  /** The pieces do not meet, so there is no cut to lay out. */
   | 'NO_INTERSECTION'
+  /** A word that is not one of the allowed ones (a fit, a surface, a unit choice). */
   | 'BAD_CHOICE'
+  /** A label with control characters, or too long to print. */
   | 'BAD_TEXT'
+  /** An option that is not accepted (unknown, given twice, or doing nothing with the others given). */
   | 'BAD_OPTION'
+  /** A job file or data structure that does not have the expected shape. */
   | 'BAD_JOB'
+  /** A file that cannot be read (missing, no permission, a FIFO), naming the option or path. */
   | 'CANNOT_READ'
+  /** A file or folder that cannot be written (read-only, no permission, disk full, name too long). */
   | 'CANNOT_WRITE';
 
 /**

@@ -98,3 +98,18 @@ export function partBox(part: PathPart): Box {
       return arcBox(part.center, part.radiusMm, part.startDeg, part.endDeg);
   }
 }
+
+/** The end points of an arc and the quadrant points its sweep passes. */
+function arcExtremePoints(center: Point2, radiusMm: number, startDeg: number, endDeg: number): Point2[] {
+  const sweepDeg = arcSweepDeg(startDeg, endDeg);
+  const at = (deg: number): Point2 => {
+    const rad = (deg * Math.PI) / 180;
+    return [center[0] + radiusMm * Math.cos(rad), center[1] + radiusMm * Math.sin(rad)];
+  };
+  const points: Point2[] = [at(startDeg), at(startDeg + sweepDeg)];
+  for (const quadrantDeg of [0, 90, 180, 270]) {
+    const fromStartDeg = (((quadrantDeg - startDeg) % 360) + 360) % 360;
+    if (fromStartDeg <= sweepDeg) points.push(at(quadrantDeg));
+  }
+  return points;
+}
