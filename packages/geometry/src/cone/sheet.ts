@@ -11,7 +11,7 @@
  * radially at both ends; on the flat side of an eccentric cone it is t/2.
  */
 import { GirthError, requireNonNegative } from '@girth/pipes';
-import { addScaled, norm, sub } from '../vec3.js';
+import { addScaled, cross, norm, normalize, sub } from '../vec3.js';
 import { frustumElement, frustumNormal } from './frustum.js';
 import type { ConeElement, ConeFrustum, ConeSheet, DiameterSurface } from './types.js';
 
@@ -121,8 +121,10 @@ export function sheetElement(sheet: ConeSheet, thetaRad: number): ConeElement {
   const e = frustumElement(sheet.given, thetaRad);
   const h = sheet.normalShiftMm;
   if (h === 0) return e;
-  const n = frustumNormal(sheet.given, thetaRad);
   const u = sub(e.small, e.large);
+  // The normal as frustumNormal computes it, reusing this element (one element evaluation, not two).
+  const R = sheet.given.largeRadiusMm;
+  const n = normalize(cross([-R * Math.sin(thetaRad), R * Math.cos(thetaRad), 0], u));
   // Move by h along the normal, then slide along the element back into the end plane.
   const slide = (-h * n[2]) / u[2];
   const shift = addScaled([n[0] * h, n[1] * h, n[2] * h], u, slide);
