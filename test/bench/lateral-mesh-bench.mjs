@@ -18,10 +18,10 @@
 // development keeps lengths on the surface, and the mesh's error is measured in
 // space, so the two are compared as like for like within the hole's curvature).
 //
-// Times are CPU time per layout (process.cpuUsage, median of batches): on a
-// loaded machine wall-clock stretches, CPU time less so. The load average is
-// printed beside the figures.
+// Times are wall clock per layout, the best of several batches (the batch the
+// machine disturbed least); the load average is printed beside the figures.
 import os from 'node:os';
+import { performance } from 'node:perf_hooks';
 import Module from 'manifold-3d';
 import { hitGenerator, solveBranch } from '@girth/geometry';
 import { layoutBranch } from '@girth/unroll';
@@ -123,34 +123,38 @@ function meshError(n) {
   return { errorMm: worst, seam };
 }
 
-/** Median CPU time of `run`, ms, over batches of `batch` calls lasting about `budgetMs` in all. */
-function cpuTimeMs(run, budgetMs) {
+/**
+ * Time of one call of `run`, ms: the best of batches of `batch` calls lasting
+ * about `budgetMs` in all (wall clock). On a loaded machine the best batch is
+ * the one least disturbed; CPU time is no steadier there, since it counts the
+ * garbage collector's helper threads and cache contention alike.
+ */
+function timeMs(run, budgetMs) {
   for (let i = 0; i < 3; i++) run();
-  const c0 = process.cpuUsage();
+  const t0 = performance.now();
   run();
-  const once = Math.max(0.005, (process.cpuUsage(c0).user + process.cpuUsage(c0).system) / 1000);
+  const once = Math.max(0.005, performance.now() - t0);
   const batch = Math.max(1, Math.round(5 / once));
-  const batches = Math.max(5, Math.min(40, Math.round(budgetMs / (once * batch))));
-  const per = [];
+  const batches = Math.max(7, Math.min(60, Math.round(budgetMs / (once * batch))));
+  let best = Infinity;
   for (let b = 0; b < batches; b++) {
-    const c = process.cpuUsage();
+    const t = performance.now();
     for (let i = 0; i < batch; i++) run();
-    const dc = process.cpuUsage(c);
-    per.push((dc.user + dc.system) / 1000 / batch);
+    best = Math.min(best, (performance.now() - t) / batch);
   }
-  return median(per);
+  return best;
 }
 
-const girthMs = (tolMm) => cpuTimeMs(() => layoutBranch(SPEC, { chordToleranceMm: tolMm }), 600);
+const girthMs = (tolMm) => timeMs(() => layoutBranch(SPEC, { chordToleranceMm: tolMm }), 600);
 const load = () => os.loadavg()[0].toFixed(1);
 
-console.log(`lateral-mesh-bench: 45° lateral, NPS 8 STD set on NPS 12 STD (header hole); node ${process.version}, manifold-3d; CPU time a layout, median; load average ${load()} on ${os.cpus().length} cores`);
+console.log(`lateral-mesh-bench: 45° lateral, NPS 8 STD set on NPS 12 STD (header hole); node ${process.version}, manifold-3d; best batch, wall clock; load average ${load()} on ${os.cpus().length} cores`);
 
-const coarse = COARSE_SEGMENTS.map((n) => ({ n, ms: cpuTimeMs(() => meshBoolean(n), 400), ...meshError(n) }));
+const coarse = COARSE_SEGMENTS.map((n) => ({ n, ms: timeMs(() => meshBoolean(n), 400), ...meshError(n) }));
 const rows = [];
 for (const n of MESH_SEGMENTS) {
   const { errorMm, seam } = meshError(n);
-  const meshMs = cpuTimeMs(() => meshBoolean(n), 1500);
+  const meshMs = timeMs(() => meshBoolean(n), 1500);
   const tolMm = Math.max(GIRTH_MIN_TOL_MM, errorMm);
   const gMs = girthMs(tolMm);
   rows.push({ n, errorMm, seam, meshMs, tolMm, gMs });
