@@ -17,7 +17,11 @@ import type { GeneratorBundle, Line3 } from './types.js';
 export function generatorLine(bundle: GeneratorBundle, phiRad: number): Line3 {
   const c = Math.cos(phiRad) * bundle.radius;
   const s = Math.sin(phiRad) * bundle.radius;
-  const origin: Vec3 = addScaled(addScaled(bundle.axisPoint, bundle.heelDirection, c), bundle.sideDirection, s);
+  // axisPoint + c · heel + s · side, added in that order (this runs for every generator sampled).
+  const p = bundle.axisPoint;
+  const h = bundle.heelDirection;
+  const q = bundle.sideDirection;
+  const origin: Vec3 = [p[0] + h[0] * c + q[0] * s, p[1] + h[1] * c + q[1] * s, p[2] + h[2] * c + q[2] * s];
   return { origin, direction: bundle.axisDirection };
 }
 

@@ -60,6 +60,43 @@ describe('mean surface of a rolled cone', () => {
     expectNear(maxEndShiftFactor(f), Math.SQRT2, 1e-12, 'factor');
   });
 
+  it('any offset: the closed-form factor is the largest over a dense sweep of elements, and never below it (invariant)', () => {
+    // Independent check: the factor's definition (sheet.ts rule) evaluated on 20 000 elements
+    // from the vectors alone, against the closed form. Offsets reach past R − r and below 0,
+    // where the largest factor need not sit at theta = 0 or π. Tolerance 1e-9 relative: the
+    // sweep's step (3e-4 rad) leaves its maximum at most ~1e-7 · f'' below the true one.
+    const sweep = (R: number, r: number, L: number, o: number): number => {
+      let worst = 1;
+      for (let i = 0; i <= 20_000; i++) {
+        const th = (2 * Math.PI * i) / 20_000;
+        const c = Math.cos(th);
+        const s = Math.sin(th);
+        const u = [o + (r - R) * c, (r - R) * s, L];
+        const nz = R - r - o * c; // (tangent × u)_z / R, with (tangent × u)_{x,y} / R = (L c, L s)
+        const k = (nz / Math.hypot(L * c, L * s, nz)) * Math.hypot(u[0]!, u[1]!, u[2]!) / L;
+        worst = Math.max(worst, Math.sqrt(1 + k * k));
+      }
+      return worst;
+    };
+    fc.assert(
+      fc.property(
+        fc.double({ min: 10, max: 1000, noNaN: true }),
+        fc.double({ min: 0.05, max: 0.95, noNaN: true }),
+        fc.double({ min: 0.05, max: 5, noNaN: true }),
+        fc.double({ min: -3, max: 3, noNaN: true }),
+        (R, rf, lf, of) => {
+          const r = rf * R;
+          const f = makeConeFrustum({ largeRadiusMm: R, smallRadiusMm: r, lengthMm: lf * R, offsetMm: of * (R - r) });
+          const closed = maxEndShiftFactor(f);
+          const dense = sweep(R, r, lf * R, of * (R - r));
+          expect(closed).toBeGreaterThanOrEqual(dense * (1 - 1e-12));
+          expectNear(closed, dense, 1e-9 * dense, 'largest end shift factor');
+        },
+      ),
+      { numRuns: 80 },
+    );
+  });
+
   it('eccentric: the thickest plate is r cos(lean of the element opposite the flat side)', () => {
     fc.assert(
       fc.property(reducerArb, (c) => {

@@ -11,27 +11,31 @@
  * radially at both ends; on the flat side of an eccentric cone it is t/2.
  */
 import { GirthError, requireNonNegative } from '@girth/pipes';
-import { addScaled, norm, sub } from '../vec3.js';
+import { addScaled, cross, norm, normalize, sub } from '../vec3.js';
 import { frustumElement, frustumNormal } from './frustum.js';
 import type { ConeElement, ConeFrustum, ConeSheet, DiameterSurface } from './types.js';
-
-const SHIFT_SAMPLES = 3600;
 
 /**
  * The largest sideways move of an element's end, per mm of move square to the
  * surface, over all elements of `frustum` (≥ 1). For a concentric cone it is
  * 1 / cos(half-apex angle); for an eccentric one it is largest opposite the flat side,
- * 1 / cos of that element's lean. Found over 3600 elements evenly spaced from
- * theta = 0, which include theta = π.
+ * 1 / cos of that element's lean.
+ *
+ * Closed form. With d = R − r > 0, offset o, length L and x = cos theta, the
+ * element at theta has the (unnormalised) normal (x L, sin theta · L, a) with
+ * a = d − o x, and length² a² + o² sin² theta + L². So the factor is
+ * sqrt(1 + g / L²) with g = a² (a² + o² (1 − x²) + L²) / (L² + a²). Written in
+ * a (x = (d − a) / o), g = a² (p + 2 d a) / (L² + a²) with p = o² − d² + L²,
+ * and g' = 2 a (d a³ + 3 d L² a + p L²) / (L² + a²)². The cubic rises with a
+ * and has one root a*: for a > 0, g falls then rises past a* (or only rises),
+ * so its largest is at an end of the range; for a < 0, g(−b) = b² (p − 2 d b) /
+ * (L² + b²) < g(b). The range of a is [d − |o|, d + |o|], whose largest
+ * magnitude is its top, d + |o|: the factor is largest at theta = π (o ≥ 0) or
+ * theta = 0 (o < 0), each evaluated on the element itself.
  * @example maxEndShiftFactor(makeConeFrustum({ largeRadiusMm: 2, smallRadiusMm: 1, lengthMm: 1 })) // √2
  */
 export function maxEndShiftFactor(frustum: ConeFrustum): number {
-  let worst = 1;
-  for (let i = 0; i <= SHIFT_SAMPLES; i++) {
-    const thetaRad = (2 * Math.PI * i) / SHIFT_SAMPLES;
-    worst = Math.max(worst, endShiftFactor(frustum, thetaRad));
-  }
-  return worst;
+  return Math.max(1, endShiftFactor(frustum, 0), endShiftFactor(frustum, Math.PI));
 }
 
 function endShiftFactor(frustum: ConeFrustum, thetaRad: number): number {
@@ -117,8 +121,10 @@ export function sheetElement(sheet: ConeSheet, thetaRad: number): ConeElement {
   const e = frustumElement(sheet.given, thetaRad);
   const h = sheet.normalShiftMm;
   if (h === 0) return e;
-  const n = frustumNormal(sheet.given, thetaRad);
   const u = sub(e.small, e.large);
+  // The normal as frustumNormal computes it, reusing this element (one element evaluation, not two).
+  const R = sheet.given.largeRadiusMm;
+  const n = normalize(cross([-R * Math.sin(thetaRad), R * Math.cos(thetaRad), 0], u));
   // Move by h along the normal, then slide along the element back into the end plane.
   const slide = (-h * n[2]) / u[2];
   const shift = addScaled([n[0] * h, n[1] * h, n[2] * h], u, slide);

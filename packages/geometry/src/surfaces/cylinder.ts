@@ -34,14 +34,27 @@ const TWO_PI = 2 * Math.PI;
 
 function intersectLine(cyl: CylinderSurface, line: Line3, eps: number): readonly LineRoot[] {
   // Remove the axial components; solve |w0 + t w1|² = R² in the plane square to the axis.
+  // Written out in scalars (this runs for every generator sampled): the same
+  // operations, in the same order, as w0 = rel − (rel·a) a and w1 = d − (d·a) a.
   const a = cyl.axisDirection;
-  const rel = sub(line.origin, cyl.axisPoint);
-  const w0 = addScaled(rel, a, -dot(rel, a));
-  const w1 = addScaled(line.direction, a, -dot(line.direction, a));
-  const qa = dot(w1, w1);
+  const o = line.origin;
+  const p = cyl.axisPoint;
+  const d = line.direction;
+  const r0 = o[0] - p[0];
+  const r1 = o[1] - p[1];
+  const r2 = o[2] - p[2];
+  const ka = -(r0 * a[0] + r1 * a[1] + r2 * a[2]);
+  const w00 = r0 + a[0] * ka;
+  const w01 = r1 + a[1] * ka;
+  const w02 = r2 + a[2] * ka;
+  const kd = -(d[0] * a[0] + d[1] * a[1] + d[2] * a[2]);
+  const w10 = d[0] + a[0] * kd;
+  const w11 = d[1] + a[1] * kd;
+  const w12 = d[2] + a[2] * kd;
+  const qa = w10 * w10 + w11 * w11 + w12 * w12;
   if (qa === 0) return []; // parallel to the axis: inside or outside forever
-  const qb = dot(w0, w1); // half of the linear coefficient
-  const qc = dot(w0, w0) - cyl.radius * cyl.radius;
+  const qb = w00 * w10 + w01 * w11 + w02 * w12; // half of the linear coefficient
+  const qc = w00 * w00 + w01 * w01 + w02 * w02 - cyl.radius * cyl.radius;
   const disc = qb * qb - qa * qc;
   // Tangency relative to qa R²: a discriminant within eps of it is a graze within about sqrt(eps) R.
   const scaleSq = qa * cyl.radius * cyl.radius;
@@ -88,10 +101,16 @@ function zeroGirth(cyl: CylinderSurface): Vec3 {
  * v = distance along the axis from `axisPoint`.
  */
 function develop(cyl: CylinderSurface, point: Vec3): FlatPoint {
-  const zero = zeroGirth(cyl);
-  const side = cross(zero, cyl.axisDirection);
-  const rel = sub(point, cyl.axisPoint);
-  return [cyl.radius * Math.atan2(dot(rel, side), dot(rel, zero)), dot(rel, cyl.axisDirection)];
+  // side = zero × axis, rel = point − axisPoint, in scalars (same operations as cross, sub, dot).
+  const z = zeroGirth(cyl);
+  const a = cyl.axisDirection;
+  const s0 = z[1] * a[2] - z[2] * a[1];
+  const s1 = z[2] * a[0] - z[0] * a[2];
+  const s2 = z[0] * a[1] - z[1] * a[0];
+  const r0 = point[0] - cyl.axisPoint[0];
+  const r1 = point[1] - cyl.axisPoint[1];
+  const r2 = point[2] - cyl.axisPoint[2];
+  return [cyl.radius * Math.atan2(r0 * s0 + r1 * s1 + r2 * s2, r0 * z[0] + r1 * z[1] + r2 * z[2]), r0 * a[0] + r1 * a[1] + r2 * a[2]];
 }
 
 function undevelop(cyl: CylinderSurface, flat: FlatPoint): Vec3 {

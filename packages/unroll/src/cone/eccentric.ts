@@ -64,8 +64,7 @@ export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricC
   const flatIndex = seam === 'flat-side' ? 0 : (N * m) / 2; // grid index of the flat side from the seam
   const thetaAt = (index: number): number => seamRad + index * stepRad;
 
-  const largeGirth = curveLength(cone, (e) => e.large, N * m);
-  const smallGirth = curveLength(cone, (e) => e.small, N * m);
+  const { large: largeGirth, small: smallGirth } = endCurveLengths(cone, N * m);
   const common = commonConeNotes(cone, largeGirth, smallGirth);
   const flatEl = sheetElement(cone.sheet, 0);
   const oppositeEl = sheetElement(cone.sheet, Math.PI);
@@ -242,21 +241,25 @@ function distanceToSegment3(p: Vec3, a: Vec3, b: Vec3): number {
 }
 
 /**
- * Length of one end curve of the mean surface (mm), by chords at `runs` and
- * 2 × `runs` equal steps and Richardson's extrapolation (error of order runs⁻⁴).
+ * Lengths of the large and small end curves of the mean surface (mm), by
+ * chords at `runs` and 2 × `runs` equal steps and Richardson's extrapolation
+ * (error of order runs⁻⁴). One sweep of 2 × `runs` elements serves both ends
+ * and both step counts: the angle 2π · 2i / (2 runs) is, to the bit, 2π · i / runs.
  */
-function curveLength(cone: ResolvedCone, pick: (e: ConeElement) => Vec3, runs: number): number {
-  const chords = (n: number): number => {
+function endCurveLengths(cone: ResolvedCone, runs: number): { readonly large: number; readonly small: number } {
+  const fineRuns = 2 * runs;
+  const elements: ConeElement[] = [];
+  for (let i = 0; i <= fineRuns; i++) elements.push(sheetElement(cone.sheet, (TWO_PI * i) / fineRuns));
+  const chords = (pick: (e: ConeElement) => Vec3, stride: number): number => {
     let sum = 0;
-    let prev = pick(sheetElement(cone.sheet, 0));
-    for (let i = 1; i <= n; i++) {
-      const p = pick(sheetElement(cone.sheet, (TWO_PI * i) / n));
+    let prev = pick(elements[0] as ConeElement);
+    for (let i = stride; i <= fineRuns; i += stride) {
+      const p = pick(elements[i] as ConeElement);
       sum += dist(prev, p);
       prev = p;
     }
     return sum;
   };
-  const coarse = chords(runs);
-  const fine = chords(2 * runs);
-  return (4 * fine - coarse) / 3;
+  const richardson = (pick: (e: ConeElement) => Vec3): number => (4 * chords(pick, 1) - chords(pick, 2)) / 3;
+  return { large: richardson((e) => e.large), small: richardson((e) => e.small) };
 }
