@@ -2,9 +2,9 @@
  * Words on reducer templates: titles, notes and warnings (the exporters add
  * the caution, `CAUTION`).
  */
-import { formatLengthBoth, SHALLOW_CONE_WARN_DEG, type GirthWarning } from '@girth/pipes';
+import { SHALLOW_CONE_WARN_DEG, type GirthWarning } from '@girth/pipes';
 import { angleFact, factLine, lengthFact, textLine, type FactLine } from '../../facts.js';
-import type { ResolvedCone } from './resolve-cone.js';
+import { formatMm, type ResolvedCone } from './resolve-cone.js';
 
 /** Cap height of the labels a cone pattern places itself (SEAM, FLAT SIDE), mm. */
 export const CONE_LABEL_HEIGHT_MM = 5;
@@ -38,7 +38,7 @@ export function coneWarnings(cone: ResolvedCone): readonly GirthWarning[] {
       field: 'lengthMm',
       message:
         `The included angle is only ${cone.apexAngleDeg.toFixed(3)}°, under ${SHALLOW_CONE_WARN_DEG}°: the pattern is a long, thin ring sector ` +
-        `(ends ${formatLengthBoth(cone.largeDiameterMm - cone.smallDiameterMm)} apart in diameter over ${formatLengthBoth(cone.lengthMm)}). ` +
+        `(ends ${formatMm(cone.largeDiameterMm - cone.smallDiameterMm)} apart in diameter over ${formatMm(cone.lengthMm)}). ` +
         'Check that a cone is meant and not a straight piece.',
     });
   }

@@ -25,7 +25,6 @@ import {
   requireWithin,
   STATIONS,
 } from '@girth/pipes';
-import { formatLengthBoth } from '@girth/pipes';
 import type { ConeLayoutOptions, ConeSpec, EccentricConeOptions, EccentricSeam } from '../types.js';
 
 /** Fewest stations around a cone: 4, one every 90°. */
@@ -83,8 +82,8 @@ export function resolveCone(spec: ConeSpec, options: ConeLayoutOptions, form: Co
   if (typeof spec !== 'object' || spec === null) {
     throw new GirthError('BAD_JOB', 'spec', 'spec: expected the reducer as an object with its diameters, length or angle, and plate thickness', spec);
   }
-  /** Lengths in error messages: mm first, inches in brackets (the describe step words templates; errors are not templates). */
-  const formatLength = formatLengthBoth;
+  /** Lengths in error messages, mm to 0.01 (the describe step words templates; errors are not templates). */
+  const formatLength = formatMm;
   const largeDiameterMm = requirePositive(spec.largeDiameterMm, 'largeDiameterMm');
   const smallDiameterMm = requirePositive(spec.smallDiameterMm, 'smallDiameterMm');
   requireWithin(largeDiameterMm, 'largeDiameterMm', { ...DIAMETER_MM, what: 'the large end' }, formatLength);
