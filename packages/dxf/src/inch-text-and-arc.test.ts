@@ -36,10 +36,12 @@ describe.each(['AC1021', 'R12'] as const)('templateToDxf %s', (version: DxfVersi
       const label = entities.find((e) => e.type === 'TEXT' && e.text === 'WELD SIDE') as { textHeight: number; startPoint: { x: number }; endPoint?: { x: number; y: number } } | undefined;
       expect(label).toBeDefined();
       expect(Math.abs(label!.textHeight - 12.7 * k)).toBeLessThan(1e-6);
-      // Centred text: its alignment point (group 11) is the label's point.
+      // Centred text (the sheet plan's rule, shared with the SVG): the label is
+      // centred on its point, so the alignment point (group 11, baseline centre)
+      // is at the point's x and half the cap height (12.7 / 2 mm) below it.
       const at = label!.endPoint ?? (label!.startPoint as { x: number; y: number });
       expect(Math.abs(at.x - 50.8 * k)).toBeLessThan(1e-6);
-      expect(Math.abs(at.y - 25.4 * k)).toBeLessThan(1e-6);
+      expect(Math.abs(at.y - (25.4 - 12.7 / 2) * k)).toBeLessThan(1e-6);
     });
 
     it(`${units}: every TEXT is as high in ${units} as its mm height divided by ${1 / k}, none 25.4 times too large or small`, () => {
