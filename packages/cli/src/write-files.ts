@@ -16,10 +16,11 @@
  * renames the journal lists (rolls forward). Either way it says so.
  */
 import { randomBytes } from 'node:crypto';
-import { lstatSync, readdirSync, readFileSync, statSync, type Stats } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
 import { GirthError } from '@girth/pipes';
+import { fileInTheWay, lstatOrUndefined, statOrUndefined } from './fs-probe.js';
 import { asFsError } from './fs-errors.js';
 
 /** One file to write: where, its whole content, and the option that named it. */
@@ -191,27 +192,3 @@ function hex(): string {
   return randomBytes(6).toString('hex');
 }
 
-function statOrUndefined(path: string): Stats | undefined {
-  try {
-    return statSync(path);
-  } catch {
-    return undefined;
-  }
-}
-
-function lstatOrUndefined(path: string): Stats | undefined {
-  try {
-    return lstatSync(path);
-  } catch {
-    return undefined;
-  }
-}
-
-/** The nearest existing ancestor of `dir` (or `dir` itself) when it is not a folder. */
-function fileInTheWay(dir: string): string | undefined {
-  for (let d = dir; ; d = dirname(d)) {
-    const st = statOrUndefined(d);
-    if (st !== undefined) return st.isDirectory() ? undefined : d;
-    if (dirname(d) === d) return undefined;
-  }
-}

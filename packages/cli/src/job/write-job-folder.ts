@@ -23,10 +23,11 @@
  * {@link recoverJobFolder}): it rolls a complete new set forward, otherwise
  * puts the old set back, and removes the staging and the old set.
  */
-import { lstatSync, readdirSync, realpathSync, statSync, type Stats } from 'node:fs';
+import { readdirSync, realpathSync, statSync } from 'node:fs';
 import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
 import { basename, dirname, isAbsolute, join, relative, resolve, sep } from 'node:path';
 import { GirthError } from '@girth/pipes';
+import { fileInTheWay, lstatOrUndefined, statOrUndefined } from '../fs-probe.js';
 import { asFsError, errnoCode } from '../fs-errors.js';
 import type { PlannedFile } from '../write-files.js';
 
@@ -229,26 +230,7 @@ function isDir(path: string): boolean {
   }
 }
 
-function lstatOrUndefined(path: string): Stats | undefined {
-  try {
-    return lstatSync(path);
-  } catch {
-    return undefined;
-  }
-}
 
-function fileInTheWay(dir: string): string | undefined {
-  for (let d = dir; ; d = dirname(d)) {
-    let st: Stats | undefined;
-    try {
-      st = statSync(d);
-    } catch {
-      st = undefined;
-    }
-    if (st !== undefined) return st.isDirectory() ? undefined : d;
-    if (dirname(d) === d) return undefined;
-  }
-}
 
 async function guard<T>(work: () => Promise<T>, field: string, path: string): Promise<T> {
   try {
