@@ -66,6 +66,8 @@ export function templateToDxf(template: Template, options?: DxfOptions): string 
     ...(o.piece === '' ? {} : { piece: o.piece }),
     textScale: o.textHeightMm / DEFAULT_TEXT_HEIGHT_MM,
     stationNumbers: o.stationNumbers,
+    // The DXF leaves the paper layer out: not planning it saves the work, and moves nothing else.
+    paper: false,
   });
   return planToDxf(plan, { units: o.units, version: o.version, joinEpsMm: o.joinEpsMm });
 }

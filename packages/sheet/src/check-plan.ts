@@ -5,7 +5,7 @@
  */
 import { GirthError } from '@girth/pipes';
 import type { PathPart, Point2 } from '@girth/unroll';
-import type { Box, SheetPlan } from './types.js';
+import type { Box, SheetItem, SheetPlan } from './types.js';
 
 function finite(v: number, field: string): void {
   if (!Number.isFinite(v)) {
@@ -60,20 +60,60 @@ export function checkPlan(plan: SheetPlan): void {
   finite(plan.page.top, 'plan.page.top');
   finite(plan.page.widthMm, 'plan.page.widthMm');
   finite(plan.page.heightMm, 'plan.page.heightMm');
-  plan.items.forEach((item, i) => {
-    const f = `plan.items[${i}]`;
-    switch (item.kind) {
-      case 'path':
-        part(item.part, `${f}.part`);
-        return;
-      case 'rect':
-        box(item.box, `${f}.box`);
-        return;
-      case 'text':
-        point(item.at, `${f}.at`);
-        point(item.pivot, `${f}.pivot`);
-        finite(item.fontMm, `${f}.fontMm`);
-        box(item.box, `${f}.box`);
-    }
-  });
+  const items = plan.items;
+  for (let i = 0; i < items.length; i++) {
+    // Field names are built only for an item that holds a non-finite number.
+    if (!itemFinite(items[i] as SheetItem)) checkItem(items[i] as SheetItem, i);
+  }
 }
+
+function partFinite(p: PathPart): boolean {
+  switch (p.kind) {
+    case 'polyline':
+      for (let i = 0; i < p.points.length; i++) {
+        const q = p.points[i] as Point2;
+        if (!Number.isFinite(q[0]) || !Number.isFinite(q[1])) return false;
+      }
+      return true;
+    case 'segment':
+      return Number.isFinite(p.from[0]) && Number.isFinite(p.from[1]) && Number.isFinite(p.to[0]) && Number.isFinite(p.to[1]);
+    case 'arc':
+      return Number.isFinite(p.center[0]) && Number.isFinite(p.center[1]) && Number.isFinite(p.radiusMm) && Number.isFinite(p.startDeg) && Number.isFinite(p.endDeg);
+  }
+}
+
+function boxFinite(b: Box): boolean {
+  return Number.isFinite(b.minX) && Number.isFinite(b.minY) && Number.isFinite(b.maxX) && Number.isFinite(b.maxY);
+}
+
+function itemFinite(item: SheetItem): boolean {
+  switch (item.kind) {
+    case 'path':
+      return partFinite(item.part);
+    case 'rect':
+      return boxFinite(item.box);
+    case 'text':
+      return (
+        Number.isFinite(item.at[0]) && Number.isFinite(item.at[1]) && Number.isFinite(item.pivot[0]) && Number.isFinite(item.pivot[1]) && Number.isFinite(item.fontMm) && boxFinite(item.box)
+      );
+  }
+}
+
+/** The detailed check of an item known to hold a non-finite number: throws naming the field. */
+function checkItem(item: SheetItem, i: number): void {
+  const f = `plan.items[${i}]`;
+  switch (item.kind) {
+    case 'path':
+      part(item.part, `${f}.part`);
+      return;
+    case 'rect':
+      box(item.box, `${f}.box`);
+      return;
+    case 'text':
+      point(item.at, `${f}.at`);
+      point(item.pivot, `${f}.pivot`);
+      finite(item.fontMm, `${f}.fontMm`);
+      box(item.box, `${f}.box`);
+  }
+}
+

@@ -43,11 +43,11 @@ function optionalLabel(value: unknown, field: 'job' | 'piece'): string | undefin
  * @returns every option, checked: `sheetUnits` 'mm' | 'in' (default 'mm'),
  *   `marginMm` in [0, 100] (default 10), `overlapMm` in [0, 200] (default 25),
  *   `job` and `piece` text of at most 200 characters or `undefined`, `textScale`
- *   in [0.01, 50] (default 1), `stationNumbers` true or false (default true).
+ *   in [0.01, 50] (default 1), `stationNumbers` and `paper` true or false (default true).
  * @throws GirthError `UNKNOWN_UNIT` (field `sheetUnits`) for units other than 'mm' or 'in';
  *   `NOT_A_NUMBER`, `NOT_FINITE` or `OUT_OF_RANGE` (field `marginMm` / `overlapMm` / `textScale`)
  *   for a number that is not one or lies outside its range; `BAD_OPTION` (field `job` / `piece` /
- *   `stationNumbers`) for a label that is not text or is longer than 200 characters, or a flag
+ *   `stationNumbers` / `paper`) for a label that is not text or is longer than 200 characters, or a flag
  *   that is not true or false.
  * @example
  * ```ts
@@ -74,6 +74,10 @@ export function resolveSheetOptions(options: SheetOptions = {}): ResolvedSheetOp
   if (typeof stationNumbers !== 'boolean') {
     throw new GirthError('BAD_OPTION', 'stationNumbers', 'stationNumbers: expected true or false', stationNumbers);
   }
+  const paper: unknown = options.paper ?? true;
+  if (typeof paper !== 'boolean') {
+    throw new GirthError('BAD_OPTION', 'paper', 'paper: expected true or false', paper);
+  }
   return {
     sheetUnits: units as SheetUnits,
     marginMm,
@@ -82,5 +86,6 @@ export function resolveSheetOptions(options: SheetOptions = {}): ResolvedSheetOp
     piece: optionalLabel(options.piece, 'piece'),
     textScale,
     stationNumbers,
+    paper,
   };
 }

@@ -146,3 +146,25 @@ describe('planSheet', () => {
     expect(e.field).toBe('template.startLine');
   });
 });
+
+describe('planSheet paper: false', () => {
+  // Invariant: leaving the paper layer out removes exactly its items and moves nothing else.
+  test('is the full plan without its paper items, for wraps and holes', () => {
+    for (const [template, extra] of [
+      [wrap(), {}],
+      [wrap(60.325, 45, 12, 'toe'), { job: 'J-3307', piece: 'SP-21', textScale: 1.5 }],
+      [hole(), { sheetUnits: 'in' as const }],
+    ] as const) {
+      const full = planSheet(template, extra);
+      const lean = planSheet(template, { ...extra, paper: false });
+      expect(full.items.some((i) => i.layer === 'paper')).toBe(true);
+      expect(lean).toEqual({ ...full, items: full.items.filter((i) => i.layer !== 'paper') });
+    }
+  });
+
+  test('refuses a flag that is not true or false, naming paper', () => {
+    const e = girthErrorOf(() => planSheet(wrap(), { paper: 'no' as unknown as boolean }));
+    expect(e.code).toBe('BAD_OPTION');
+    expect(e.field).toBe('paper');
+  });
+});

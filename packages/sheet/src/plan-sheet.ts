@@ -96,12 +96,27 @@ function titleItems(template: Template, opts: ResolvedSheetOptions, drawing: Box
   const top = drawing.minY - TITLE_GAP_MM;
   const contentW = Math.max(drawing.maxX - drawing.minX, title.widthMm);
   const items: SheetItem[] = [
-    // Inset by half its weight so even a renderer that pads every stroke on all sides stays inside.
-    { kind: 'path', role: 'title-rule', layer: 'paper', part: { kind: 'segment', from: [left + RULE_MM / 2, top], to: [left + contentW - RULE_MM / 2, top] } },
+    ...(opts.paper ? [titleRule(left, top, contentW)] : []),
     ...title.lines.map((l) =>
       leftText(l.text, left + TEXT_INSET_EM * l.fontMm, top - l.baselineMm, l.fontMm, l.bold, `title-${l.role}`, 'text'),
     ),
     leftText(title.caution.text, left + TEXT_INSET_EM * title.caution.fontMm, top - title.caution.baselineMm, title.caution.fontMm, true, 'caution', 'text'),
+  ];
+  if (opts.paper) items.push(...paperBarItems(left, top, title));
+  return { items, widthMm: contentW, heightMm: title.heightMm };
+}
+
+type TitleBlockPlan = ReturnType<typeof planTitleBlock>;
+
+/** The rule over the title block: a `paper` item. */
+function titleRule(left: number, top: number, contentW: number): SheetItem {
+  // Inset by half its weight so even a renderer that pads every stroke on all sides stays inside.
+  return { kind: 'path', role: 'title-rule', layer: 'paper', part: { kind: 'segment', from: [left + RULE_MM / 2, top], to: [left + contentW - RULE_MM / 2, top] } };
+}
+
+/** The calibration bar and its caption, under the title block: `paper` items. */
+function paperBarItems(left: number, top: number, title: TitleBlockPlan): SheetItem[] {
+  return [
     {
       kind: 'rect',
       role: 'calibration-bar',
@@ -111,7 +126,6 @@ function titleItems(template: Template, opts: ResolvedSheetOptions, drawing: Box
     },
     leftText(title.barCaption.text, left + title.barCaption.xMm, top - title.barCaption.baselineMm, title.barCaption.fontMm, false, 'calibration-caption', 'paper'),
   ];
-  return { items, widthMm: contentW, heightMm: title.heightMm };
 }
 
 /**
@@ -129,7 +143,8 @@ function titleItems(template: Template, opts: ResolvedSheetOptions, drawing: Box
  * @param template - the template (mm, y-up) from `@girth/unroll`.
  * @param options - sheet units ('mm' | 'in'), margin (mm, 0–100, default 10), glue tab
  *   (mm, 0–200, default 25; wraps only), job and piece (text, ≤ 200 characters), title
- *   text scale (0.01–50, default 1), station numbers on or off (default on).
+ *   text scale (0.01–50, default 1), station numbers on or off (default on), the `paper`
+ *   layer's items in or left out (default in; left out, nothing else moves).
  * @returns the plan: plain readonly data.
  * @throws GirthError for bad options (see `resolveSheetOptions`) and for a template that
  *   cannot be drawn (see `checkTemplate`: e.g. `NOT_A_NUMBER` on `template.cut[0].points[14][1]`).
@@ -155,7 +170,7 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
   const title = titleItems(template, opts, drawing);
   const m = opts.marginMm;
   const items: SheetItem[] = [
-    ...(overlap ? overlapItems(overlap) : []),
+    ...(overlap && opts.paper ? overlapItems(overlap) : []),
     ...template.marks.map((part): SheetItem => ({ kind: 'path', role: 'mark', layer: 'mark', part })),
     ...template.stationLines.map(
       (s): SheetItem => ({ kind: 'path', role: 'station-line', layer: 'mark', part: { kind: 'segment', from: s.from, to: s.to }, station: s.n }),

@@ -141,6 +141,13 @@ export interface SheetOptions {
   readonly textScale?: number;
   /** Number the station lines; default true. */
   readonly stationNumbers?: boolean;
+  /**
+   * Put the `paper` layer's items (glue tab and its hatching, title rule,
+   * calibration bar and caption) in the plan; default true. A writer that
+   * leaves them out (the DXF) asks for `false`: the page, the drawing box and
+   * every other item stay exactly where they are.
+   */
+  readonly paper?: boolean;
 }
 
 /** {@link SheetOptions} with every default filled in and every value checked. */
@@ -152,4 +159,5 @@ export interface ResolvedSheetOptions {
   readonly piece: string | undefined;
   readonly textScale: number;
   readonly stationNumbers: boolean;
+  readonly paper: boolean;
 }
