@@ -80,6 +80,7 @@ export { planeOps } from './surfaces/plane.js';
 export { developPoint, lineRoots, undevelopPoint } from './surfaces/line-intersection.js';
 export type { LineSurfaceOptions } from './surfaces/line-intersection.js';
 export { GRAZE_SINE_TOL, findGrazingPhis } from './surfaces/grazing.js';
+export { minimizeOnInterval } from './internal/golden-min.js';
 export { frustumConeSurface } from './cone/frustum-surface.js';
 export type { BevelStatus, GrooveSpec, ResolvedGroove, StationBevel, WeldStationFrame } from './weld/types.js';
 export { AWS_D1_1_PREQUALIFIED_MAX_DIHEDRAL_DEG, AWS_D1_1_PREQUALIFIED_MIN_DIHEDRAL_DEG, B16_25_BEVEL_DEG, B16_25_BEVEL_TOL_DEG, B16_25_COMPOUND_BREAK_MM, B16_25_COMPOUND_UPPER_DEG, B16_25_LAND_MM, B16_25_LAND_TOL_MM, B16_25_SINGLE_BEVEL_MAX_WALL_MM, B16_25_SQUARE_MAX_WALL_MM, TANGENT_JOINT_WARN_DIHEDRAL_DEG } from './weld/limits.js';

@@ -1,8 +1,9 @@
 /**
- * Golden-section search for a local maximum of a function on an interval.
+ * Golden-section search for a local maximum of a function on an interval: the
+ * geometry package's minimum search run on -f. Negation is exact, so every
+ * bracket step and the result are the same as a search for the maximum itself.
  */
-
-const INV_PHI = (Math.sqrt(5) - 1) / 2; // 0.618...
+import { minimizeOnInterval } from '@girth/geometry';
 
 /**
  * A local maximum of `f` on [`lo`, `hi`], to within `tolX` in x. `f` should
@@ -19,26 +20,6 @@ export function maximizeOnInterval(
   hi: number,
   tolX: number,
 ): { readonly x: number; readonly fx: number } {
-  let a = lo;
-  let b = hi;
-  let c = b - INV_PHI * (b - a);
-  let d = a + INV_PHI * (b - a);
-  let fc = f(c);
-  let fd = f(d);
-  while (b - a > tolX) {
-    if (fc >= fd) {
-      b = d;
-      d = c;
-      fd = fc;
-      c = b - INV_PHI * (b - a);
-      fc = f(c);
-    } else {
-      a = c;
-      c = d;
-      fc = fd;
-      d = a + INV_PHI * (b - a);
-      fd = f(d);
-    }
-  }
-  return fc >= fd ? { x: c, fx: fc } : { x: d, fx: fd };
+  const min = minimizeOnInterval((x) => -f(x), lo, hi, tolX);
+  return { x: min.x, fx: -min.fx };
 }
