@@ -3,14 +3,15 @@
  * fitter runs it. Needs `pnpm run build` first (it runs packages/cli/dist).
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION } from '@girth/unroll';
 import { expectClose } from './test-support/close.js';
-import { BIN_PATH, CLI_PACKAGE_DIR, DEMO_JOB, DIST_MAIN } from './test-support/paths.js';
+import { BIN_PATH, DEMO_JOB } from './test-support/paths.js';
 import { closedPolylines, extents, readDxf, readSvgSheet, svgText } from './test-support/read-back.js';
 import { leftoverTempFiles, listFiles, makeTempDir, removeTempDir, snapshotDir } from './test-support/temp-dir.js';
+import { requireBuild } from './test-support/require-build.js';
 
 interface Spawned {
   readonly code: number | null;
@@ -25,27 +26,6 @@ function girth(args: readonly string[], cwd: string): Spawned {
   return { code: run.status, out: run.stdout, err: run.stderr };
 }
 
-/** Fails with what to do when the program is not built, or built from older sources. */
-function requireBuild(): void {
-  if (!existsSync(DIST_MAIN)) {
-    throw new Error(`${DIST_MAIN} is missing: run \`pnpm run build\` in the repository root before the end-to-end tests`);
-  }
-  const src = join(CLI_PACKAGE_DIR, 'src');
-  const stale: string[] = [];
-  const visit = (dir: string): void => {
-    for (const entry of readdirSync(dir, { withFileTypes: true })) {
-      const full = join(dir, entry.name);
-      if (entry.isDirectory()) {
-        if (entry.name !== 'test-support') visit(full);
-      } else if (entry.name.endsWith('.ts') && !entry.name.endsWith('.test.ts')) {
-        const built = join(CLI_PACKAGE_DIR, 'dist', full.slice(src.length + 1).replace(/\.ts$/, '.js'));
-        if (!existsSync(built) || statSync(built).mtimeMs < statSync(full).mtimeMs) stale.push(full.slice(src.length + 1));
-      }
-    }
-  };
-  visit(src);
-  if (stale.length > 0) throw new Error(`packages/cli/dist is older than ${stale.join(', ')}: run \`pnpm run build\` in the repository root`);
-}
 
 // What the demo job's templates must be, from its pieces (fixtures/demo/job.json)
 // and the pipe ODs of ASME B36.10M (recalled): a wrap spans pi × the OD it wraps

@@ -5,9 +5,9 @@
 import { mkdirSync, readdirSync, readFileSync, symlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { GirthError } from '@girth/pipes';
 import { recoverFolder, writeFilesAtomically } from './write-files.js';
 import { leftoverTempFiles, listFiles, makeTempDir, removeTempDir } from './test-support/temp-dir.js';
+import { girthError } from './test-support/rejected-girth-error.js';
 
 let tmp = '';
 beforeEach(() => {
@@ -17,16 +17,6 @@ afterEach(() => {
   removeTempDir(tmp);
 });
 
-/** The GirthError a promise rejects with; fails when it resolves or rejects with anything else. */
-async function girthError(promise: Promise<unknown>): Promise<GirthError> {
-  try {
-    await promise;
-  } catch (error) {
-    expect(error).toBeInstanceOf(GirthError);
-    return error as GirthError;
-  }
-  throw new Error('expected a GirthError, but it resolved');
-}
 
 describe('writeFilesAtomically', () => {
   it('writes every file whole, making missing folders, and returns the absolute paths', async () => {

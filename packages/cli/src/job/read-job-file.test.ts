@@ -6,9 +6,9 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { GirthError } from '@girth/pipes';
 import { readJobFile } from './read-job-file.js';
 import { makeTempDir, removeTempDir } from '../test-support/temp-dir.js';
+import { girthError } from '../test-support/rejected-girth-error.js';
 
 let tmp = '';
 beforeEach(() => {
@@ -18,15 +18,6 @@ afterEach(() => {
   removeTempDir(tmp);
 });
 
-async function girthError(promise: Promise<unknown>): Promise<GirthError> {
-  try {
-    await promise;
-  } catch (error) {
-    expect(error).toBeInstanceOf(GirthError);
-    return error as GirthError;
-  }
-  throw new Error('expected a GirthError, but it resolved');
-}
 
 describe('readJobFile', () => {
   it('reads a file that starts with a UTF-8 byte-order mark (as some Windows editors save it)', async () => {

@@ -7,9 +7,9 @@
 import { mkdirSync, readdirSync, readFileSync, symlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { GirthError } from '@girth/pipes';
 import { jobFolderSidecars, recoverJobFolder, SET_MARKER, writeJobFolder } from './write-job-folder.js';
 import { listFiles, makeTempDir, removeTempDir } from '../test-support/temp-dir.js';
+import { girthError } from '../test-support/rejected-girth-error.js';
 
 let tmp = '';
 beforeEach(() => {
@@ -19,15 +19,6 @@ afterEach(() => {
   removeTempDir(tmp);
 });
 
-async function girthError(promise: Promise<unknown>): Promise<GirthError> {
-  try {
-    await promise;
-  } catch (error) {
-    expect(error).toBeInstanceOf(GirthError);
-    return error as GirthError;
-  }
-  throw new Error('expected a GirthError, but it resolved');
-}
 
 /** A complete set as writeJobFolder leaves it: files and the marker. */
 function makeSet(dir: string, tag: string, complete = true): void {
