@@ -5,6 +5,7 @@ import { GirthError, MM_PER_INCH, requireFinite } from '@girth/pipes';
 import type { LayoutResult, PipeUsed, Template } from '@girth/unroll';
 import { jointFields } from './internal/joint-fields.js';
 import { hasStationValue } from './internal/station-cells.js';
+import { weldPrepFields } from './internal/weld-prep-fields.js';
 import type { PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson, WarningJson } from './types.js';
 
 /**
@@ -91,6 +92,14 @@ function pipeJson(p: PipeUsed, i: number, toUnit: (mm: unknown, field: string) =
  *   `thickness`, `maxInclinationDeg`, `stationCount`, `segmentCount`, `ends`,
  *   `pieces`, and for the eccentric form `seam` and `outline`.
  *
+ * With weld preparation (only then): the cut templates' station columns
+ * `dihedral` and `torch` (and `torchTilt` on a header hole), degrees, and
+ * `weldPrep: { kind, grooveAngleDeg, land, wall, stations: [{ n, angleDeg,
+ * dihedralDeg, openingDeg, bevel, torchDeg?, bevelWidth? }] }`, with `fit` and
+ * `hole: [{ n, angleDeg, torchTiltDeg, leanAlongHeaderDeg,
+ * leanAroundHeaderDeg, idGirth?, idAxial? }]` for a branch and `squareEnds`
+ * (ASME B16.25, recalled) for a miter.
+ *
  * Every number is converted by its quantity: a length (its key has no unit
  * suffix) from mm to `units` (inches by dividing by 25.4 exactly), an angle
  * (key ending in `Deg`) kept in degrees, a count kept as it is; each is
@@ -130,10 +139,11 @@ export function toResultJson(result: LayoutResult, options: ResultJsonOptions): 
     message: String(w.message),
     ...(w.field === undefined ? {} : { field: String(w.field) }),
   }));
-  const own = jointFields(result, {
+  const writers = {
     length: toUnit,
-    angle: (deg, field) => denoise(requireFinite(deg, field)),
-    count: (value, field) => requireFinite(value, field),
-  });
-  return { kind: String(result.kind), units, templates, warnings, pipes, ...own };
+    angle: (deg: unknown, field: string) => denoise(requireFinite(deg, field)),
+    count: (value: unknown, field: string) => requireFinite(value, field),
+  };
+  const own = jointFields(result, writers);
+  return { kind: String(result.kind), units, templates, warnings, pipes, ...own, ...weldPrepFields(result, writers) };
 }

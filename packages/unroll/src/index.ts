@@ -74,11 +74,12 @@ export type { MiterLayout } from './miter/types.js';
 export { layoutMiter } from './miter/layout-miter.js';
 
 // Added in this wave: host surfaces, limits, weld preparation, fit-up, typed templates and their wording.
-export type { FlatTemplate, HoleTemplate, LayoutKind, LayoutResultBase, StationQuantity, TemplateBase, WrapTemplate } from './types.js';
+export type { FlatTemplate, HoleTemplate, LayoutKind, LayoutResultBase, StationBand, StationQuantity, TemplateBase, WrapTemplate } from './types.js';
 export { angleFact, describeFacts, describeLength, describeLine, factLine, lengthFact, textLine, worded } from './facts.js';
 export type { AngleFact, DescribeOptions, Fact, FactLine, LengthFact, TemplateFacts, TextFact } from './facts.js';
 export { describeResult, describeTemplate } from './describe-result.js';
-export type { BranchWeldPrep, HoleStationPrep, MiterWeldPrep, PlaneCutWeldPrep, StationWeldPrep, WeldPrepOptions } from './weld/types.js';
+export type { BranchWeldPrep, HoleStationPrep, MiterWeldPrep, PlaneCutWeldPrep, StationWeldPrep, WeldPrep, WeldPrepOptions } from './weld/types.js';
+export { CLOSED_GROOVE_MARK, HOLE_TORCH_COLUMN, WELD_ANGLE_DECIMALS, WELD_PREP_COLUMNS, weldEndLine, withBranchWeldPrep, withMiterWeldPrep, withPlaneCutWeldPrep } from './weld/with-weld-prep.js';
 export { weldPrepForBranch } from './weld/weld-prep-branch.js';
 export { weldPrepForMiter, weldPrepForPlaneCut } from './weld/weld-prep-cuts.js';
 export { DEFAULT_ORDINATE_REFERENCE, ORDINATE_REFERENCES, ORDINATE_REFERENCE_WORDS, requireOrdinateReference } from './fit-up/ordinate-reference.js';

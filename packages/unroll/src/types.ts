@@ -15,6 +15,7 @@ import type { TemplateFacts } from './facts.js';
 import type { ConeLayout } from './cone/types.js';
 import type { MiterLayout } from './miter/types.js';
 import type { PlaneCutLayout } from './plane-cut/types.js';
+import type { WeldPrep } from './weld/types.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -79,6 +80,12 @@ export interface StationColumn {
   readonly heading: string;
   /** What the values measure: lengths in mm, angles in degrees or counts. */
   readonly quantity: StationQuantity;
+  /**
+   * For `angle` columns: the fixed digits a table writes (e.g. 1 for the weld
+   * preparation's dihedral and torch angles, to 0.1°); absent: up to 3,
+   * trailing zeros dropped. The JSON keeps the full value either way.
+   */
+  readonly decimals?: number;
 }
 
 /**
@@ -130,6 +137,25 @@ export interface WrapTemplate extends TemplateBase {
    * words, lower case: `heel` for branch and plane cuts, `throat` for miters.
    */
   readonly startLine: string;
+  /**
+   * Rows of words written beside the wrap, one cell per station, off the
+   * template (never across the cut line): the weld preparation's torch and
+   * dihedral angles. Absent when none were asked for.
+   */
+  readonly bands?: readonly StationBand[];
+}
+
+/**
+ * A row of words written beside a wrap at its stations (the bevel band): a
+ * heading and one short cell per station, already worded. A station left out
+ * gets no cell.
+ */
+export interface StationBand {
+  /** Contract key, e.g. `torch`, `dihedral`. */
+  readonly key: string;
+  /** Words a fitter reads at the start of the row, e.g. `Torch angle (deg)`. */
+  readonly heading: string;
+  readonly cells: readonly { readonly n: number; readonly text: string }[];
 }
 
 /** A template laid on a header's OD to mark the hole: x is the girth from the top line, y the axial position. */
@@ -171,6 +197,8 @@ export interface LayoutResultBase {
   readonly templates: readonly Template[];
   readonly pipes: readonly PipeUsed[];
   readonly warnings: readonly GirthWarning[];
+  /** The weld preparation, when asked for (see `withBranchWeldPrep` and its siblings); absent otherwise. */
+  readonly weldPrep?: WeldPrep;
 }
 
 /**

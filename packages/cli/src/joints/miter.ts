@@ -8,9 +8,10 @@ import { reportAngle, reportLength, reportLengthAtLeast } from '../report-style.
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe } from './read-inputs.js';
 import type { WrittenLength } from './types.js';
+import { readGroove, WELD_PREP_FIELD_NAMES, WELD_PREP_OPTIONS, weldPrepFromOptions, weldPrepHelp, weldPrepJobKeys, type WeldPrepInput } from './weld-prep-options.js';
 
 /** A segmented (miter) elbow, as a fitter writes it. */
-export interface MiterInput {
+export interface MiterInput extends WeldPrepInput {
   readonly joint: 'miter';
   readonly pipe: string;
   readonly bend: number;
@@ -37,6 +38,7 @@ export const miterJoint = defineJoint<MiterInput>({
     'radius-nps': { type: 'string' },
     tangent: { type: 'string' },
     surface: { type: 'string' },
+    ...WELD_PREP_OPTIONS,
   },
   help: `girth miter: a miter (segmented) elbow
 
@@ -47,10 +49,12 @@ export const miterJoint = defineJoint<MiterInput>({
   --radius-nps X         centreline radius as X times the NPS (1.5 = long radius)
   --tangent LENGTH       straight length added to each end piece (default 0)
   --surface od|id        pipe surface laid on the weld planes (default od)
+${weldPrepHelp('', true)}
 
 Examples:
   girth miter --pipe "NPS 10 STD" --bend 90 --welds 3 --radius-nps 1.5
-  girth miter --pipe "NPS 24 STD" --bend 45 --pieces 3 --radius 36in --svg ell.svg --csv ell.csv`,
+  girth miter --pipe "NPS 24 STD" --bend 45 --pieces 3 --radius 36in --svg ell.svg --csv ell.csv
+  girth miter --pipe "NPS 12 STD" --bend 90 --welds 3 --radius-nps 1.5 --groove-angle 75 --land 1/16`,
   fieldNames: {
     bendDeg: 'bend',
     welds: 'welds',
@@ -60,6 +64,7 @@ Examples:
     tangentMm: 'tangent',
     fitSurface: 'surface',
     pipe: 'pipe',
+    ...WELD_PREP_FIELD_NAMES,
   },
   fromOptions: (args) => ({
     joint: 'miter',
@@ -71,6 +76,7 @@ Examples:
     ...optional('radiusNps', numberOption(args, 'radius-nps')),
     ...optional('tangent', stringOption(args, 'tangent')),
     ...optional('surface', optionalChoice(args, 'surface', FIT_SURFACES)),
+    ...weldPrepFromOptions(args),
   }),
   jobKeys: (k) => ({
     pipe: k.text(),
@@ -81,23 +87,24 @@ Examples:
     radiusNps: k.number().optional(),
     tangent: k.length().optional(),
     surface: k.choice(FIT_SURFACES).optional(),
+    ...weldPrepJobKeys(k),
   }),
   layout: (input, ctx, lib) => {
     const radiusMm = readLength(input.radius, 'radius', ctx);
     const tangentMm = readLength(input.tangent, 'tangent', ctx);
-    return lib.layoutMiter(
-      {
-        pipe: readPipe(input.pipe, 'pipe', ctx),
-        bendDeg: input.bend,
-        ...(input.welds !== undefined ? { welds: input.welds } : {}),
-        ...(input.pieces !== undefined ? { pieces: input.pieces } : {}),
-        ...(radiusMm !== undefined ? { radiusMm } : {}),
-        ...(input.radiusNps !== undefined ? { radiusNps: input.radiusNps } : {}),
-        ...(tangentMm !== undefined ? { tangentMm } : {}),
-        ...(input.surface !== undefined ? { fitSurface: input.surface } : {}),
-      },
-      { stations: ctx.stations },
-    );
+    const spec = {
+      pipe: readPipe(input.pipe, 'pipe', ctx),
+      bendDeg: input.bend,
+      ...(input.welds !== undefined ? { welds: input.welds } : {}),
+      ...(input.pieces !== undefined ? { pieces: input.pieces } : {}),
+      ...(radiusMm !== undefined ? { radiusMm } : {}),
+      ...(input.radiusNps !== undefined ? { radiusNps: input.radiusNps } : {}),
+      ...(tangentMm !== undefined ? { tangentMm } : {}),
+      ...(input.surface !== undefined ? { fitSurface: input.surface } : {}),
+    };
+    const groove = readGroove(input, ctx);
+    const layout = lib.layoutMiter(spec, { stations: ctx.stations });
+    return groove === undefined ? layout : lib.withMiterWeldPrep(layout, lib.weldPrepForMiter(spec, groove, { stations: ctx.stations }));
   },
   reportLines: (layout, style) => {
     const result = layout as MiterLayout;

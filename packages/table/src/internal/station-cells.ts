@@ -62,16 +62,25 @@ export function tableLength(mm: unknown, options: StationTableOptions, field: st
 
 /**
  * One station value as the table writes it, by the column's quantity: a length
- * in the table's format, an angle in degrees (to 0.001°, never converted), a
- * count as a plain number (never converted).
+ * in the table's format, an angle in degrees (never converted; to the column's
+ * fixed `decimals` when it has them, e.g. 0.1° for weld preparation, else to
+ * 0.001° with trailing zeros dropped), a count as a plain number (never converted).
  */
 export function tableValue(
   value: unknown,
   quantity: Template['stationColumns'][number]['quantity'],
   options: StationTableOptions,
   field: string,
+  decimals?: number,
 ): string {
-  if (quantity === 'angle') return String(Math.round(requireFinite(value, field) * 1000) / 1000);
+  if (quantity === 'angle') {
+    const deg = requireFinite(value, field);
+    if (decimals !== undefined && Number.isInteger(decimals) && decimals >= 0 && decimals <= 6) {
+      const text = deg.toFixed(decimals);
+      return Number(text) === 0 ? (0).toFixed(decimals) : text; // never -0.0
+    }
+    return String(Math.round(deg * 1000) / 1000);
+  }
   if (quantity === 'count') return String(requireFinite(value, field));
   return tableLength(value, options, field);
 }
@@ -96,7 +105,7 @@ export function stationCells(template: Template, options: StationTableOptions): 
     angles[i]!.toFixed(decimals),
     ...columns.map((c) =>
       hasStationValue(s, c.key)
-        ? tableValue(s.values[c.key], c.quantity, options, `template.stations[${i}].values.${c.key}`)
+        ? tableValue(s.values[c.key], c.quantity, options, `template.stations[${i}].values.${c.key}`, c.decimals)
         : options.blank ?? '',
     ),
   ]);

@@ -103,3 +103,6 @@ export interface MiterWeldPrep {
   readonly squareEnds: WeldEndBevel;
   readonly warnings: readonly GirthWarning[];
 }
+
+/** The weld preparation of any joint, told apart by `kind`. */
+export type WeldPrep = BranchWeldPrep | PlaneCutWeldPrep | MiterWeldPrep;
