@@ -18,6 +18,7 @@ import { planOverlap, type OverlapPlan } from './plan/overlap.js';
 import { hatchLines } from './plan/hatch.js';
 import { planTitleLines } from './plan/title-lines.js';
 import { planTitleBlock, RULE_MM } from './plan/title-block.js';
+import { planBevelBands } from './plan/bevel-band.js';
 
 /** Box of the lines of a template (cut, square line, stations, marks), template mm. */
 function geometryBox(template: Template): Box {
@@ -138,7 +139,9 @@ function paperBarItems(left: number, top: number, title: TitleBlockPlan): SheetI
  * labels, the glue tab of a wrap) with `marginMm` of paper around it; the title
  * block `TITLE_GAP_MM` under it, flush left with it. Station numbers sit just
  * past the `from` end of each station line (the square line end of a wrap, the
- * girth line end of a hole), along the line.
+ * girth line end of a hole), along the line. A wrap with weld preparation
+ * gets its bevel band (torch and dihedral angle under each station) below all
+ * of that, never across the cut line (`plan/bevel-band.ts`).
  *
  * @param template - the template (mm, y-up) from `@girth/unroll`.
  * @param options - sheet units ('mm' | 'in'), margin (mm, 0–100, default 10), glue tab
@@ -166,6 +169,9 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
   for (const t of numbers) drawing = unionBox(drawing, t.box);
   for (const t of labels) drawing = unionBox(drawing, t.box);
   if (overlap) drawing = unionBox(drawing, growBox(overlap.box, MAX_STROKE_MM / 2));
+  // The bevel band (weld prep), under everything else drawn: it never crosses the cut line.
+  const band = template.kind === 'wrap' && (template.bands?.length ?? 0) > 0 ? planBevelBands(template.bands ?? [], template.stationLines, drawing.minY) : undefined;
+  if (band) drawing = unionBox(drawing, band.box);
 
   const title = titleItems(template, opts, drawing);
   const m = opts.marginMm;
@@ -179,6 +185,7 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
     ...(template.kind === 'wrap' ? [{ kind: 'path', role: 'square-line', layer: 'mark', part: template.squareLine } as const] : []),
     ...template.cut.map((part): SheetItem => ({ kind: 'path', role: 'cut', layer: 'cut', part })),
     ...labels.map((t) => centred(t, 'label', true)),
+    ...(band?.items ?? []),
     ...title.items,
   ];
   const plan: SheetPlan = {

@@ -41,7 +41,9 @@ export type SheetTextRole =
   | 'title-placement'
   | 'title-print'
   | 'caution'
-  | 'calibration-caption';
+  | 'calibration-caption'
+  | 'bevel-band'
+  | 'bevel-band-heading';
 
 /** What a rectangle is for. */
 export type SheetRectRole = 'overlap-tab' | 'calibration-bar';

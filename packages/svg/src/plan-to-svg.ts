@@ -118,6 +118,15 @@ function stationsGroup(r: ByRole, frame: Frame, w: NumberWriter): string {
   ]);
 }
 
+/** The bevel band (weld prep): its headings bold, its cells centred under the stations; nothing when the plan has none. */
+function bevelBandGroup(r: ByRole, frame: Frame, w: NumberWriter): string[] {
+  if (!r.texts.has('bevel-band') && !r.texts.has('bevel-band-heading')) return [];
+  return [el('g', { id: 'bevel-band', class: 'bevel-band', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY }, [
+    ...(r.texts.get('bevel-band-heading') ?? []).map((t) => textNode(t, frame, w, { class: 'bevel-band-heading', 'font-weight': 'bold' })),
+    ...(r.texts.get('bevel-band') ?? []).map((t) => textNode(t, frame, w, { class: 'bevel-band-cell', 'text-anchor': 'middle', 'data-station': (t.stations ?? []).join(' ') })),
+  ])];
+}
+
 const TITLE_ROLES = ['title-job', 'title-title', 'title-note', 'title-placement', 'title-print'] as const;
 
 function titleBlockGroup(plan: SheetPlan, r: ByRole, frame: Frame, w: NumberWriter): string {
@@ -161,7 +170,7 @@ function calibrationGroup(r: ByRole, frame: Frame, w: NumberWriter): string {
  * coordinates (mm, y-up) are flipped onto the paper (y-down) about the plan's
  * page. Groups with stable ids: `overlap`, `marks`, `stations`, `square-line`,
  * `cut`, `labels`, `title-block`, `calibration` (always present, empty when
- * there is nothing to draw). Numbers are rounded to 0.001 mm (0.00001 in).
+ * there is nothing to draw), and `bevel-band` after `labels` only when the plan has one. Numbers are rounded to 0.001 mm (0.00001 in).
  *
  * @param plan - a plan from `planSheet` of `@girth/sheet` (already checked).
  * @returns the SVG document as a string (UTF-8, with an XML declaration).
@@ -198,6 +207,7 @@ export function planToSvg(plan: SheetPlan): string {
         { id: 'labels', class: 'labels', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle', 'font-weight': 'bold' },
         (r.texts.get('label') ?? []).map((t) => textNode(t, frame, w)),
       ),
+      ...bevelBandGroup(r, frame, w),
       titleBlockGroup(plan, r, frame, w),
       calibrationGroup(r, frame, w),
     ],
