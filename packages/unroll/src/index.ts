@@ -81,6 +81,7 @@ export { describeResult, describeTemplate } from './describe-result.js';
 export type { BranchWeldPrep, HoleStationPrep, MiterWeldPrep, PlaneCutWeldPrep, StationWeldPrep, WeldPrep, WeldPrepOptions } from './weld/types.js';
 export { CLOSED_GROOVE_MARK, HOLE_TORCH_COLUMN, WELD_ANGLE_DECIMALS, WELD_PREP_COLUMNS, weldEndLine, withBranchWeldPrep, withMiterWeldPrep, withPlaneCutWeldPrep } from './weld/with-weld-prep.js';
 export { weldPrepForBranch } from './weld/weld-prep-branch.js';
+export { ID_LINE_COLUMN, layoutBranchCutOnOd } from './weld/branch-od-cut.js';
 export { weldPrepForMiter, weldPrepForPlaneCut } from './weld/weld-prep-cuts.js';
 export { DEFAULT_ORDINATE_REFERENCE, ORDINATE_REFERENCES, ORDINATE_REFERENCE_WORDS, requireOrdinateReference } from './fit-up/ordinate-reference.js';
 export type { OrdinateReference } from './fit-up/ordinate-reference.js';

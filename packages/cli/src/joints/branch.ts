@@ -22,10 +22,13 @@ export interface BranchInput extends WeldPrepInput {
   /** Override which branch surface meets which header surface. */
   readonly branchSurface?: 'inside' | 'outside';
   readonly headerSurface?: 'inside' | 'outside';
+  /** Set-on only: `od` cuts on the branch OD line and draws the ID line dashed; `id` (default) cuts on the ID line. */
+  readonly cutOn?: 'od' | 'id';
 }
 
 const FITS = ['set-on', 'set-in'] as const;
 const SURFACES = ['inside', 'outside'] as const;
+const CUT_ON = ['od', 'id'] as const;
 
 /** `girth branch` and a job's `"joint": "branch"`. */
 export const branchJoint = defineJoint<BranchInput>({
@@ -40,6 +43,7 @@ export const branchJoint = defineJoint<BranchInput>({
     gap: { type: 'string' },
     'branch-surface': { type: 'string' },
     'header-surface': { type: 'string' },
+    'cut-on': { type: 'string' },
     ...WELD_PREP_OPTIONS,
   },
   help: `girth branch: a branch on a header (tee, lateral, centred or offset)
@@ -54,6 +58,8 @@ export const branchJoint = defineJoint<BranchInput>({
   --gap LENGTH           root gap normal to the header (default 0)
   --branch-surface inside|outside, --header-surface inside|outside
                          override which surfaces meet (give both)
+  --cut-on od|id         set-on: cut on the branch OD line and draw the ID line
+                         dashed (od), or cut on the ID line (id, default)
 ${weldPrepHelp('the header')}
 
 Examples:
@@ -61,8 +67,9 @@ Examples:
   girth branch --header "NPS 12 STD" --branch "NPS 8 STD" --angle 45 --gap 1/16 --svg lat.svg
   girth branch --header "NPS 8 STD" --branch "NPS 2 XS" --offset "2 1/2" --fit set-in --dxf drain.dxf
   girth branch --units mm --header "DN 300 x 8" --branch "DN 150 x 7.1" --json
+  girth branch --header "NPS 10 XS" --branch "NPS 8 XS" --cut-on od --svg tee.svg
   girth branch --header "NPS 12 STD" --branch "NPS 6 STD" --angle 45 --groove-angle 45 --land 1/16 --gap 1/8`,
-  fieldNames: { angleDeg: 'angle', offsetMm: 'offset', gapMm: 'gap', fit: 'fit', header: 'header', branch: 'branch', contact: 'branchSurface', ...WELD_PREP_FIELD_NAMES },
+  fieldNames: { angleDeg: 'angle', offsetMm: 'offset', gapMm: 'gap', fit: 'fit', header: 'header', branch: 'branch', contact: 'branchSurface', cutOn: 'cutOn', ...WELD_PREP_FIELD_NAMES },
   fromOptions: (args) => ({
     joint: 'branch',
     header: requireOption(args, 'header', '"NPS 12 STD"'),
@@ -73,6 +80,7 @@ Examples:
     ...optional('gap', stringOption(args, 'gap')),
     ...optional('branchSurface', optionalChoice(args, 'branch-surface', SURFACES)),
     ...optional('headerSurface', optionalChoice(args, 'header-surface', SURFACES)),
+    ...optional('cutOn', optionalChoice(args, 'cut-on', CUT_ON)),
     ...weldPrepFromOptions(args),
   }),
   jobKeys: (k) => ({
@@ -84,6 +92,7 @@ Examples:
     gap: k.length().optional(),
     branchSurface: k.choice(SURFACES).optional(),
     headerSurface: k.choice(SURFACES).optional(),
+    cutOn: k.choice(CUT_ON).optional(),
     ...weldPrepJobKeys(k),
   }),
   layout: (input, ctx, lib) => {
@@ -103,8 +112,13 @@ Examples:
         : {}),
     };
     const groove = readGroove(input, ctx);
-    const layout = lib.layoutBranch(spec, { stations: ctx.stations });
-    return groove === undefined ? layout : lib.withBranchWeldPrep(layout, lib.weldPrepForBranch(spec, groove, { stations: ctx.stations }));
+    const onOd = input.cutOn === 'od';
+    if (onOd && (input.fit === 'set-in' || input.branchSurface !== undefined)) {
+      const name = ctx.fieldName('cutOn');
+      throw new GirthError('BAD_OPTION', name, `${name}: cutting on the branch OD with the ID line is for a set-on branch with the usual surfaces; leave out the set-in fit and the surface overrides`, input.cutOn);
+    }
+    const layout = onOd ? lib.layoutBranchCutOnOd(spec, { stations: ctx.stations }) : lib.layoutBranch(spec, { stations: ctx.stations });
+    return groove === undefined ? layout : lib.withBranchWeldPrep(layout, lib.weldPrepForBranch(onOd ? { ...spec, contact: { branch: 'outside', header: 'outside' } } : spec, groove, { stations: ctx.stations }));
   },
   describe: (result, style) => {
     const r = result as BranchLayout;
