@@ -90,6 +90,17 @@ describe('girth miter --groove-angle: the elbow square ends get the ASME B16.25 
   });
 });
 
+describe('girth miter --gap: the root gap comes off the pieces and the stock', () => {
+  it('an NPS 10 STD 90° elbow, 3 welds, gap 1/8 in: the stock is 3 × g / cos 15° shorter (each end set back g/2 square to its weld plane; right-triangle geometry)', async () => {
+    const ell = ['miter', '--pipe', 'NPS 10 STD', '--bend', '90', '--welds', '3', '--radius-nps', '1.5'];
+    const plain = (await runJson(ell)) as { stockLength: number; gap?: number };
+    const gapped = (await runJson([...ell, '--gap', '1/8'])) as { stockLength: number; gap?: number };
+    expect(plain.gap).toBeUndefined();
+    expect(gapped.gap).toBe(0.125);
+    expect(plain.stockLength - gapped.stockLength).toBeCloseTo((3 * 0.125) / Math.cos((15 * Math.PI) / 180), 5); // contract rounds to 1e-6 in
+  });
+});
+
 describe('files', () => {
   let tmp = '';
   beforeAll(() => {

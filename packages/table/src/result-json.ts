@@ -86,7 +86,8 @@ function pipeJson(p: PipeUsed, i: number, toUnit: (mm: unknown, field: string) =
  * - `miter`: `bendDeg`, `welds`, `cutAngleDeg`, `radius`, `stockLength`,
  *   `pieces: [{ label, count, center, back, throat, templateId }]`,
  *   `cuts: [{ n, centerAt, longSideDeg, referenceLineAt, oppositeLineAt }]`,
- *   `pieceCount`, `tangent`, `fitSurface`, `stationCount`;
+ *   `pieceCount`, `tangent`, `fitSurface`, `stationCount`, and `gap` when a
+ *   root gap was given;
  * - `reducer`: `form`, `length`, `apexAngleDeg`, `pattern` (concentric:
  *   `outerRadius`, `innerRadius`, `sweepDeg`, `slantHeight`), `diametersAt`,
  *   `thickness`, `maxInclinationDeg`, `stationCount`, `segmentCount`, `ends`,

@@ -21,6 +21,7 @@ export interface MiterInput extends WeldPrepInput {
   readonly radiusNps?: number;
   readonly tangent?: WrittenLength;
   readonly surface?: 'od' | 'id';
+  readonly gap?: WrittenLength;
 }
 
 const FIT_SURFACES = ['od', 'id'] as const;
@@ -38,6 +39,7 @@ export const miterJoint = defineJoint<MiterInput>({
     'radius-nps': { type: 'string' },
     tangent: { type: 'string' },
     surface: { type: 'string' },
+    gap: { type: 'string' },
     ...WELD_PREP_OPTIONS,
   },
   help: `girth miter: a miter (segmented) elbow
@@ -49,6 +51,8 @@ export const miterJoint = defineJoint<MiterInput>({
   --radius-nps X         centreline radius as X times the NPS (1.5 = long radius)
   --tangent LENGTH       straight length added to each end piece (default 0)
   --surface od|id        pipe surface laid on the weld planes (default od)
+  --gap LENGTH           root gap at each weld, square to the weld plane (default 0);
+                         each piece end is set back half of it, the stock is shorter
 ${weldPrepHelp('', true)}
 
 Examples:
@@ -64,6 +68,7 @@ Examples:
     tangentMm: 'tangent',
     fitSurface: 'surface',
     pipe: 'pipe',
+    gapMm: 'gap',
     ...WELD_PREP_FIELD_NAMES,
   },
   fromOptions: (args) => ({
@@ -76,6 +81,7 @@ Examples:
     ...optional('radiusNps', numberOption(args, 'radius-nps')),
     ...optional('tangent', stringOption(args, 'tangent')),
     ...optional('surface', optionalChoice(args, 'surface', FIT_SURFACES)),
+    ...optional('gap', stringOption(args, 'gap')),
     ...weldPrepFromOptions(args),
   }),
   jobKeys: (k) => ({
@@ -87,11 +93,13 @@ Examples:
     radiusNps: k.number().optional(),
     tangent: k.length().optional(),
     surface: k.choice(FIT_SURFACES).optional(),
+    gap: k.length().optional(),
     ...weldPrepJobKeys(k),
   }),
   layout: (input, ctx, lib) => {
     const radiusMm = readLength(input.radius, 'radius', ctx);
     const tangentMm = readLength(input.tangent, 'tangent', ctx);
+    const gapMm = readLength(input.gap, 'gap', ctx);
     const spec = {
       pipe: readPipe(input.pipe, 'pipe', ctx),
       bendDeg: input.bend,
@@ -101,6 +109,7 @@ Examples:
       ...(input.radiusNps !== undefined ? { radiusNps: input.radiusNps } : {}),
       ...(tangentMm !== undefined ? { tangentMm } : {}),
       ...(input.surface !== undefined ? { fitSurface: input.surface } : {}),
+      ...(gapMm !== undefined ? { gapMm } : {}),
     };
     const groove = readGroove(input, ctx);
     const layout = lib.layoutMiter(spec, { stations: ctx.stations });

@@ -124,6 +124,8 @@ export const BAD_OPTIONS: readonly BadOptionCase[] = [
   { name: 'a land with no groove angle', argv: [...CUT, '--land', '1/16'], code: 'MISSING_INPUT', field: '--groove-angle' },
   { name: 'a negative root gap with a groove', argv: [...TEE, '--groove-angle', '45', '--gap=-1/8'], code: 'NEGATIVE', field: '--gap' },
   { name: 'a negative cut-back root gap with a groove', argv: [...CUT, '--groove-angle', '45', '--gap=-1/8'], code: 'NEGATIVE', field: '--gap' },
+  { name: 'a negative miter root gap', argv: [...ELL, '--gap=-1/8'], code: 'NEGATIVE', field: '--gap' },
+  { name: 'a miter root gap that leaves no throat', argv: [...ELL, '--gap', '6'], code: 'OUT_OF_RANGE', field: '--gap' },
   { name: 'an OD cut on a set-in branch', argv: [...TEE, '--fit', 'set-in', '--cut-on', 'od'], code: 'BAD_OPTION', field: '--cut-on' },
   { name: 'a cut-on that is not od or id', argv: [...TEE, '--cut-on', 'middle'], code: 'BAD_CHOICE', field: '--cut-on' },
   { name: 'a negative plate', argv: [...without(CONE, '--plate'), '--plate=-3/8'], code: 'NEGATIVE', field: '--plate' },

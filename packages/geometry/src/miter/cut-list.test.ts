@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { hitGenerator } from '../generators.js';
 import { addScaled, dot, norm, sub, type Vec3 } from '../vec3.js';
+import { expectGirthError } from '@girth/pipes/test-support';
 import { miterGeometry } from './elbow-geometry.js';
 import { miterCutList } from './cut-list.js';
 import type { MiterCutList, MiterGeometry, MiterSpec } from './types.js';
@@ -177,5 +178,35 @@ describe('miterCutList', () => {
       }),
       { numRuns: 150 },
     );
+  });
+});
+
+describe('miter root gap', () => {
+  // ASME B36.10M (recalled): NPS 12 STD 12.750 x 0.375 in. R = 1.5 × NPS 12 = 18 in, 3 welds: c = 15°.
+  const pipe = { odMm: 323.85, wallMm: 9.525 };
+  const base = { pipe, bendDeg: 90, welds: 3, radiusMm: 457.2 };
+  const c = (15 * Math.PI) / 180;
+
+  it('sets each piece end back g/2 square to its weld plane: g/(2 cos c) along the pipe, every length shorter by that per cut end, the stock by welds × g / cos c (right-triangle geometry)', () => {
+    const g = 3.2;
+    const plain = miterCutList(miterGeometry(base));
+    const gapped = miterCutList(miterGeometry({ ...base, gapMm: g }));
+    const along = g / (2 * Math.cos(c));
+    const [endP, midP] = plain.pieces;
+    const [endG, midG] = gapped.pieces;
+    for (const key of ['center', 'back', 'throat'] as const) {
+      expect(endG![key]).toBeCloseTo(endP![key] - along, 9);
+      expect(midG![key]).toBeCloseTo(midP![key] - 2 * along, 9);
+    }
+    expect(gapped.stock.lengthMm).toBeCloseTo(plain.stock.lengthMm - (3 * g) / Math.cos(c), 9);
+    // One cut still serves the pieces on both sides: the last cut sits one end piece's centre length before the stock's end.
+    expect(gapped.stock.lengthMm - gapped.stock.cuts.at(-1)!.centerAtMm).toBeCloseTo(endG!.center, 9);
+  });
+
+  it('refuses a negative gap and one that leaves a piece no throat (g < 2 (R − r) sin c)', () => {
+    expectGirthError(() => miterGeometry({ ...base, gapMm: -1 }), 'NEGATIVE', 'gapMm');
+    const most = 2 * (457.2 - 323.85 / 2) * Math.sin(c);
+    expect(() => miterGeometry({ ...base, gapMm: most * 0.999 })).not.toThrow();
+    expectGirthError(() => miterGeometry({ ...base, gapMm: most * 1.001 }), 'OUT_OF_RANGE', 'gapMm');
   });
 });

@@ -1,6 +1,7 @@
 /**
  * The assembled miter elbow in 3D: piece frames and weld planes.
  */
+import { offsetSurface } from '../surfaces/line-intersection.js';
 import type { GeneratorBundle, PlaneSurface } from '../types.js';
 import { addScaled, scale, type Vec3 } from '../vec3.js';
 import { miterWarnings } from './miter-warnings.js';
@@ -54,6 +55,11 @@ function weldPlanes(spec: ResolvedMiterSpec): readonly PlaneSurface[] {
   return Array.from({ length: spec.welds }, (_, i) => weldPlane(spec, i + 1));
 }
 
+/** The plane a piece end is cut to: the weld plane (normal toward the piece) moved half the root gap into the piece. */
+function setBack(plane: PlaneSurface, spec: ResolvedMiterSpec): PlaneSurface {
+  return spec.gapMm > 0 ? (offsetSurface(plane, spec.gapMm / 2) as PlaneSurface) : plane;
+}
+
 function piece3d(spec: ResolvedMiterSpec, k: number): MiterPiece3d {
   const thetaRad = 2 * k * cutRad(spec);
   const direction = inPlane(thetaRad);
@@ -72,11 +78,11 @@ function piece3d(spec: ResolvedMiterSpec, k: number): MiterPiece3d {
   if (k > 0) {
     const plane = weldPlane(spec, k);
     // The plane's normal points from piece k−1 toward piece k: toward this piece, as a host's must.
-    nearCut = { kind: 'miter-cut-end', weld: k, bundle: bundle(scale(direction, -1)), host: plane };
+    nearCut = { kind: 'miter-cut-end', weld: k, bundle: bundle(scale(direction, -1)), host: setBack(plane, spec) };
   }
   if (k < last) {
     const plane = weldPlane(spec, k + 1);
-    farCut = { kind: 'miter-cut-end', weld: k + 1, bundle: bundle(direction), host: { ...plane, normal: scale(plane.normal, -1) } };
+    farCut = { kind: 'miter-cut-end', weld: k + 1, bundle: bundle(direction), host: setBack({ ...plane, normal: scale(plane.normal, -1) }, spec) };
   }
   const role = k === 0 || k === last ? 'end' : 'middle';
   const squareEndCenter =

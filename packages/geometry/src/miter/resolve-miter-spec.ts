@@ -2,7 +2,7 @@
  * Checks a miter spec and resolves its choices (welds or pieces, radius in mm
  * or in nominal sizes).
  */
-import { BEND_DEG, GirthError, requireWithin, MM_PER_INCH as MM_PER_IN, requireFinite, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
+import { BEND_DEG, formatLengthBoth, GirthError, requireWithin, MM_PER_INCH as MM_PER_IN, requireFinite, requireInteger, requireNonNegative, requirePositive } from '@girth/pipes';
 import { fitRadiusMm, type CutFitSurface } from '../plane-cut/fit-surface.js';
 import { resolvePipeSection, type ResolvedPipeSection } from '../pipe-section.js';
 import { MAX_MITER_RADIUS_MM, MAX_MITER_WELDS } from './limits.js';
@@ -21,7 +21,8 @@ import type { MiterSpec, ResolvedMiterSpec } from './types.js';
  *  - `BAD_OPTION` (`radiusMm`/`radiusNps`) when both are given (`MISSING_INPUT` on `radiusMm` when neither is), or
  *    `radiusNps` without `pipe.npsIn`;
  *  - `OUT_OF_RANGE` (`radiusMm`/`radiusNps`) for a radius below half the OD;
- *  - `NEGATIVE` (`tangentMm`); `NOT_A_NUMBER`/`NOT_FINITE` for NaN or Infinity
+ *  - `NEGATIVE` (`tangentMm`, `gapMm`); `OUT_OF_RANGE` (`gapMm`) for a root gap
+ *    that leaves a piece no throat; `NOT_A_NUMBER`/`NOT_FINITE` for NaN or Infinity
  *    anywhere; `BAD_CHOICE` (`fitSurface`); the pipe errors of `resolvePipeSection`.
  * @example resolveMiterSpec({ pipe: { odMm: 323.9, wallMm: 9.53 }, bendDeg: 90, pieces: 4, radiusMm: 457.2 }).cutAngleDeg // 15
  */
@@ -44,6 +45,8 @@ export function resolveMiterSpec(spec: MiterSpec): ResolvedMiterSpec {
   const radiusMm = resolveRadiusMm(spec, pipe);
   const tangentMm = spec.tangentMm === undefined ? 0 : requireNonNegative(spec.tangentMm, 'tangentMm');
   const fitSurface: CutFitSurface = spec.fitSurface ?? 'od';
+  const fitR = fitRadiusMm(pipe, fitSurface);
+  const gapMm = resolveGapMm(spec, { radiusMm, fitRadiusMm: fitR, cutAngleDeg, welds, tangentMm });
   return {
     kind: 'miter-spec',
     pipe,
@@ -54,8 +57,37 @@ export function resolveMiterSpec(spec: MiterSpec): ResolvedMiterSpec {
     radiusMm,
     tangentMm,
     fitSurface,
-    fitRadiusMm: fitRadiusMm(pipe, fitSurface),
+    fitRadiusMm: fitR,
+    gapMm,
   };
+}
+
+/**
+ * The root gap, checked: ≥ 0, and small enough that every piece keeps some
+ * throat. Each cut end is set back g / 2 square to its weld plane, that is
+ * g / (2 cos c) along the pipe, from a throat of (R − r) tan c per cut end
+ * (plus the tangent on an end piece): with middle pieces g < 2 (R − r) sin c,
+ * else g < 2 ((R − r) tan c + tangent) cos c.
+ */
+function resolveGapMm(
+  spec: MiterSpec,
+  e: { readonly radiusMm: number; readonly fitRadiusMm: number; readonly cutAngleDeg: number; readonly welds: number; readonly tangentMm: number },
+): number {
+  if (spec.gapMm === undefined) return 0;
+  const g = requireNonNegative(spec.gapMm, 'gapMm');
+  if (g === 0) return 0;
+  const c = (e.cutAngleDeg * Math.PI) / 180;
+  const throatMm = (e.radiusMm - e.fitRadiusMm) * Math.tan(c);
+  const mostMm = e.welds >= 2 ? 2 * throatMm * Math.cos(c) : 2 * (throatMm + e.tangentMm) * Math.cos(c);
+  if (!(g < mostMm)) {
+    throw new GirthError(
+      'OUT_OF_RANGE',
+      'gapMm',
+      `gapMm: a root gap of ${formatLengthBoth(g)} leaves a piece no length on the throat; it must be less than ${formatLengthBoth(mostMm)} for this radius and cut angle`,
+      spec.gapMm,
+    );
+  }
+  return g;
 }
 
 function resolveWelds(spec: MiterSpec): { welds: number; field: 'welds' | 'pieces' } {

@@ -30,6 +30,12 @@ export interface MiterSpec {
   readonly tangentMm?: number;
   /** Which pipe surface meets the weld planes (default `od`), see {@link CutFitSurface}. */
   readonly fitSurface?: CutFitSurface;
+  /**
+   * Root gap at every weld, mm, ≥ 0 (default 0), measured square to the weld
+   * plane: each piece end is set back half of it from its weld plane, so the
+   * pieces (and the stock) are shorter and the bend and radius stay as asked.
+   */
+  readonly gapMm?: number;
 }
 
 /** A checked miter spec with everything resolved. */
@@ -47,11 +53,15 @@ export interface ResolvedMiterSpec {
   readonly fitSurface: CutFitSurface;
   /** Radius of the generators that meet the weld planes, mm. */
   readonly fitRadiusMm: number;
+  /** Root gap at every weld, mm, square to the weld plane (0 when none). */
+  readonly gapMm: number;
 }
 
 /**
  * One cut end of a piece: the piece's generators running toward the weld
- * plane, and that plane (its normal toward the piece).
+ * plane, and the plane the end is cut to (its normal toward the piece): the
+ * weld plane itself, or with a root gap the weld plane moved half the gap
+ * into the piece.
  */
 export interface MiterCutEnd {
   readonly kind: 'miter-cut-end';

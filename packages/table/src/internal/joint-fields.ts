@@ -65,6 +65,8 @@ function miterFields(r: MiterLayout, w: FieldWriters): Record<string, unknown> {
     tangent: w.length(r.tangentMm, 'tangentMm'),
     fitSurface: String(r.fitSurface),
     stationCount: w.count(r.stations, 'stations'),
+    // Written only with a root gap, so elbows without one keep their exact contract.
+    ...(r.gapMm > 0 ? { gap: w.length(r.gapMm, 'gapMm') } : {}),
   };
 }
 

@@ -35,7 +35,8 @@ const PIECE_LABELS: readonly WrapLabel[] = [
  * radius below eq. (5) as recalled.
  *
  * @param spec see `MiterSpec`: pipe, `bendDeg`, `welds` or `pieces`, `radiusMm` or
- *   `radiusNps`, optional `tangentMm` and `fitSurface`.
+ *   `radiusNps`, optional `tangentMm`, `fitSurface` and `gapMm` (root gap at
+ *   every weld: each piece end set back half of it, square to its weld plane).
  * @param options `stations` (4 to 360, default 16), `chordToleranceMm` (default 0.05).
  * @throws GirthError as `resolveMiterSpec` (bad bend, counts, radius, tangent,
  *   NaN/Infinity), `OUT_OF_RANGE` for a bad station count, the option errors of `sampleCut`.
@@ -92,6 +93,7 @@ export function layoutMiter(spec: MiterSpec, options: CutLayoutOptions = {}): Mi
     radiusMm: s.radiusMm,
     tangentMm: s.tangentMm,
     fitSurface: s.fitSurface,
+    gapMm: s.gapMm,
     stations,
     pieces: list.pieces,
     stock: list.stock,

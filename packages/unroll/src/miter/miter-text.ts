@@ -17,6 +17,18 @@ export function describeMiter(s: ResolvedMiterSpec): FactLine {
  * Title, notes and facts of one piece's template.
  * @example miterPieceText(g, list, list.pieces[0], 1021.0).title // 'Miter end piece: NPS 12 STD, 90° in 4 pieces ...'
  */
+/**
+ * The root gap's note, none without a gap: each piece end is set back half the
+ * gap from its weld plane, so the lengths and the stock already allow for it.
+ */
+function gapNote(gapMm: number, cutAngleDeg: number, welds: number): FactLine[] {
+  if (!(gapMm > 0)) return [];
+  const alongMm = gapMm / (2 * Math.cos((cutAngleDeg * Math.PI) / 180));
+  return [
+    factLine`Root gap ${lengthFact(gapMm)} at each weld, square to the weld plane: every piece end is set back ${lengthFact(gapMm / 2)} from its weld plane (${lengthFact(alongMm)} along the pipe), so the lengths here and the stock (${lengthFact(2 * alongMm * welds)} shorter than without the gap) already allow for it; one cut still serves the pieces on both sides of it.`,
+  ];
+}
+
 export function miterPieceText(g: MiterGeometry, list: MiterCutList, piece: MiterPieceCut, stretchOutMm: number): ReturnType<typeof worded> {
   const s = g.spec;
   const end = piece.templateId === 'miter-end';
@@ -34,6 +46,7 @@ export function miterPieceText(g: MiterGeometry, list: MiterCutList, piece: Mite
       factLine`Wrap on the OD; stretch-out ${lengthFact(stretchOutMm)}. Station 1 (THROAT) goes on the throat line, the side toward the bend centre; BACK at 180°.`,
       textLine(reading),
       fitSurfaceNote(s.fitSurface, 'the weld plane'),
+      ...gapNote(s.gapMm, s.cutAngleDeg, s.welds),
       factLine`Cut all pieces from one straight length of ${lengthFact(list.stock.lengthMm)} in order, no allowance for kerf; turn each next piece 180° about its axis before fitting.`,
       ...g.warnings.map((w) => textLine(`Warning: ${w.message}`)),
     ],

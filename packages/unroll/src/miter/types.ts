@@ -25,6 +25,8 @@ export interface MiterLayout extends LayoutResultBase {
   /** Straight length added to each end piece, mm. */
   readonly tangentMm: number;
   readonly fitSurface: CutFitSurface;
+  /** Root gap at every weld, mm, square to the weld plane (0 when none); the pieces and the stock allow for it. */
+  readonly gapMm: number;
   readonly stations: number;
   readonly pieces: readonly MiterPieceCut[];
   readonly stock: MiterStockPlan;

@@ -188,7 +188,7 @@ export function withPlaneCutWeldPrep(layout: PlaneCutLayout, prep: PlaneCutWeldP
 export function withMiterWeldPrep(layout: MiterLayout, prep: MiterWeldPrep): MiterLayout {
   requireSameStations(layout.stations, prep);
   const notes = [
-    grooveLine('included groove, half on each piece end,', prep),
+    grooveLine('included groove, half on each piece end,', prep, layout.gapMm),
     ...conventionLines('the other piece'),
     weldEndLine('Square ends of the elbow', prep.squareEnds),
   ];
