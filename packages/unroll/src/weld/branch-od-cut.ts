@@ -6,7 +6,8 @@ import { GirthError } from '@girth/pipes';
 import { hitGenerator, solveBranch, type BranchSpec } from '@girth/geometry';
 import { layoutBranch } from '../branch/layout-branch.js';
 import type { BranchLayout, LayoutBranchOptions } from '../branch/types.js';
-import { textLine, worded } from '../facts.js';
+import { textLine } from '../facts.js';
+import { appendedNotes } from './with-weld-prep.js';
 import type { Point2, StationColumn, WrapTemplate } from '../types.js';
 import { sampleCut } from '../wrap/sample-cut.js';
 
@@ -59,7 +60,7 @@ export function layoutBranchCutOnOd(spec: BranchSpec, options: LayoutBranchOptio
   const note = textLine(
     'Cut on the solid line: the branch OD on the header OD. The dashed line is the ID line, where the branch ID meets the header OD (the set-on fit-up line): bevel from the OD line down to it; ID line cutback is its distance from the same square line.',
   );
-  const text = cut.facts === undefined ? { notes: [...cut.notes, ...worded({ title: [], notes: [note] }).notes] } : worded({ title: cut.facts.title, notes: [...cut.facts.notes, note] });
+  const text = appendedNotes(cut, [note]);
   const withId: WrapTemplate = {
     ...cut,
     ...text,

@@ -7,7 +7,7 @@
 import { GirthError } from '@girth/pipes';
 import type { WeldEndBevel } from '@girth/geometry';
 import type { BranchLayout } from '../branch/types.js';
-import { angleFact, factLine, lengthFact, textLine, worded, type FactLine } from '../facts.js';
+import { angleFact, describeFacts, factLine, lengthFact, textLine, type FactLine } from '../facts.js';
 import type { MiterLayout } from '../miter/types.js';
 import type { PlaneCutLayout } from '../plane-cut/types.js';
 import type { StationBand, StationColumn, StationRow, Template } from '../types.js';
@@ -68,6 +68,16 @@ export function weldEndLine(what: string, end: WeldEndBevel): FactLine {
   return [...base, ...factLine`, turning to ${angleFact(end.upperBevelDeg)} from ${lengthFact(end.breakMm)} above the inside surface (compound bevel for a wall of ${lengthFact(end.wallMm)}; recalled).`];
 }
 
+/**
+ * A template's notes with more lines after them (worded mm first, as a layout
+ * words them; `describeResult` words them for the job), its facts kept in step.
+ * @example appendedNotes(template, [textLine('Weld prep: ...')]).notes.at(-1) // 'Weld prep: ...'
+ */
+export function appendedNotes(t: Template, lines: readonly FactLine[]): Pick<Template, 'notes' | 'facts'> {
+  const notes = [...t.notes, ...describeFacts(lines)];
+  return t.facts === undefined ? { notes } : { notes, facts: { title: t.facts.title, notes: [...t.facts.notes, ...lines] } };
+}
+
 /** The template with extra columns (values by station number) and note lines; its wording rebuilt from its facts. */
 function extendTemplate(
   t: Template,
@@ -77,10 +87,7 @@ function extendTemplate(
   bands: readonly StationBand[] | undefined,
 ): Template {
   const stations: StationRow[] = t.stations.map((row) => ({ ...row, values: { ...row.values, ...valuesOf(row.n) } }));
-  const text =
-    t.facts === undefined
-      ? { title: t.title, notes: [...t.notes, ...worded({ title: [], notes }).notes] }
-      : worded({ title: t.facts.title, notes: [...t.facts.notes, ...notes] });
+  const text = appendedNotes(t, notes);
   const extra = { ...text, stationColumns: [...t.stationColumns, ...columns], stations };
   if (t.kind === 'wrap') return { ...t, ...extra, ...(bands === undefined ? {} : { bands: [...(t.bands ?? []), ...bands] }) };
   return { ...t, ...extra };
