@@ -31,10 +31,11 @@ export const WELD_PREP_OPTIONS: OptionSpec = {
  * @example weldPrepHelp('the header')
  */
 export function weldPrepHelp(against: string, included = false): string {
-  const what = included ? 'included angle of the groove between two pieces, half on each' : `angle of the groove against ${against}`;
-  return `  --groove-angle DEG     weld prep: ${what}, more than 0 and less than 90;
-                         adds the dihedral and torch angle at each station to the
-                         table, the JSON and a bevel band on the wrap
+  const what = included ? 'included angle between two pieces, half on each' : `groove angle against ${against}`;
+  return `  --groove-angle DEG     weld prep: the ${what},
+                         more than 0 and less than 90; adds the dihedral and torch
+                         angle at each station to the table, the JSON and a bevel
+                         band on the wrap
   --land LENGTH          weld prep: land (root face), less than the wall (default 0)`;
 }
 
