@@ -9,7 +9,20 @@
 // audit by the caller. Plain JavaScript so it runs both from vitest (against
 // the sources) and from `pnpm fuzz` (against the built packages).
 import { GirthError } from '@girth/pipes';
-import { layoutBranch, layoutConcentricCone, layoutEccentricCone, layoutMiter, layoutPlaneCut } from '@girth/unroll';
+import {
+  layoutBranch,
+  layoutBranchCutOnOd,
+  layoutConcentricCone,
+  layoutEccentricCone,
+  layoutMiter,
+  layoutPlaneCut,
+  weldPrepForBranch,
+  weldPrepForMiter,
+  weldPrepForPlaneCut,
+  withBranchWeldPrep,
+  withMiterWeldPrep,
+  withPlaneCutWeldPrep,
+} from '@girth/unroll';
 import { templateToSvg } from '@girth/svg';
 import { templateToDxf } from '@girth/dxf';
 import { formatStationTable, stationTableCsv, toResultJson } from '@girth/table';
@@ -56,6 +69,12 @@ function angle(r) {
   return 0.5 + 90 * r();
 }
 
+/** A random groove for weld prep (about a third of the joints), or undefined; angles and lands at and beyond their limits too. */
+function groove(r) {
+  if (r() >= 0.3) return undefined;
+  return { grooveAngleDeg: r() < 0.3 ? pick(r, [37.5, 45, 60, 75, 0, 90, 89.999]) : 0.5 + 89 * r(), ...(r() < 0.6 ? { landMm: length(r, 3) } : {}) };
+}
+
 /** One random joint: which layout function, its spec and options. */
 export function randomJoint(r) {
   const stations = pick(r, [4, 8, 12, 16, 24, 36, 7, 13]);
@@ -77,7 +96,11 @@ export function randomJoint(r) {
       ...(r() < 0.3 ? { gapMm: length(r, 2) } : {}),
       ...(r() < 0.3 ? { contact: { branch: pick(r, ['inside', 'outside']), header: pick(r, ['inside', 'outside']) } } : {}),
     };
-    return { kind, run: () => layoutBranch(spec, { stations }) };
+    const g = groove(r);
+    const onOd = r() < 0.1 && spec.fit !== 'set-in' && spec.contact === undefined;
+    const lay = () => (onOd ? layoutBranchCutOnOd(spec, { stations }) : layoutBranch(spec, { stations }));
+    const prepSpec = onOd ? { ...spec, contact: { branch: 'outside', header: 'outside' } } : spec;
+    return { kind, run: () => (g === undefined ? lay() : withBranchWeldPrep(lay(), weldPrepForBranch(prepSpec, g, { stations }))) };
   }
   if (kind === 'miter') {
     const spec = {
@@ -86,12 +109,15 @@ export function randomJoint(r) {
       welds: pick(r, [1, 2, 3, 4, 5, 8, 0]),
       ...(r() < 0.5 ? { radiusNps: pick(r, [1, 1.5, 2, 3, 0.5]) } : { radiusMm: length(r, 500) }),
       ...(r() < 0.3 ? { fitSurface: pick(r, ['od', 'id']) } : {}),
+      ...(r() < 0.3 ? { gapMm: length(r, 4) } : {}),
     };
-    return { kind, run: () => layoutMiter(spec, { stations }) };
+    const g = groove(r);
+    return { kind, run: () => (g === undefined ? layoutMiter(spec, { stations }) : withMiterWeldPrep(layoutMiter(spec, { stations }), weldPrepForMiter(spec, g, { stations }))) };
   }
   if (kind === 'cut') {
     const spec = { pipe: pipe(r), angleDeg: angle(r), ...(r() < 0.3 ? { gapMm: length(r, 2) } : {}), ...(r() < 0.3 ? { fitSurface: pick(r, ['od', 'id']) } : {}) };
-    return { kind, run: () => layoutPlaneCut(spec, { stations }) };
+    const g = groove(r);
+    return { kind, run: () => (g === undefined ? layoutPlaneCut(spec, { stations }) : withPlaneCutWeldPrep(layoutPlaneCut(spec, { stations }), weldPrepForPlaneCut(spec, g, { stations }))) };
   }
   const large = length(r, 300);
   const spec = {
