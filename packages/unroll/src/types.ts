@@ -15,6 +15,9 @@ import type { TemplateFacts } from './facts.js';
 import type { ConeLayout } from './cone/types.js';
 import type { MiterLayout } from './miter/types.js';
 import type { PlaneCutLayout } from './plane-cut/types.js';
+import type { JointFitUp } from './fit-up/with-fit-up.js';
+import type { OrdinateReference } from './fit-up/ordinate-reference.js';
+import type { TemplateOrdinates } from './fit-up/template-ordinates.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -114,6 +117,10 @@ export interface TemplateBase {
   readonly labels: readonly TemplateLabel[];
   readonly stationColumns: readonly StationColumn[];
   readonly stations: readonly StationRow[];
+  /** The ordinates of its cut(s), from the chosen square line, worded for the job; set by `withFitUp` on templates with a cut measured from a square line. */
+  readonly ordinates?: TemplateOrdinates;
+  /** The joint's fit-up dimensions in the job's unit, one sentence a line; set by `withFitUp`. */
+  readonly fitUpLines?: readonly string[];
 }
 
 /** A template wrapped around a pipe's OD: x is the girth from station 1, y runs along the pipe. */
@@ -171,6 +178,10 @@ export interface LayoutResultBase {
   readonly templates: readonly Template[];
   readonly pipes: readonly PipeUsed[];
   readonly warnings: readonly GirthWarning[];
+  /** The joint's fit-up dimensions (mm, degrees); set by `withFitUp`. */
+  readonly fitUp?: JointFitUp;
+  /** The square line the station tables are measured from; set by `withFitUp` (absent: the long point). */
+  readonly ordinatesFrom?: OrdinateReference;
 }
 
 /**
