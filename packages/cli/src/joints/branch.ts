@@ -7,10 +7,11 @@ import { numberOption, optionalChoice, requireOption, stringOption } from '../ar
 import { reportLength } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe } from './read-inputs.js';
+import { angleCheckOptions, applyFitUp, FIT_UP_FIELD_NAMES, FIT_UP_HELP, FIT_UP_OPTIONS, fitUpFromOptions, fitUpJobKeys, type FitUpInput } from './fit-up-options.js';
 import type { WrittenLength } from './types.js';
 
 /** A branch on a header, as a fitter writes it. */
-export interface BranchInput {
+export interface BranchInput extends FitUpInput {
   readonly joint: 'branch';
   readonly header: string;
   readonly branch: string;
@@ -39,6 +40,7 @@ export const branchJoint = defineJoint<BranchInput>({
     gap: { type: 'string' },
     'branch-surface': { type: 'string' },
     'header-surface': { type: 'string' },
+    ...FIT_UP_OPTIONS,
   },
   help: `girth branch: a branch on a header (tee, lateral, centred or offset)
 
@@ -52,13 +54,15 @@ export const branchJoint = defineJoint<BranchInput>({
   --gap LENGTH           root gap normal to the header (default 0)
   --branch-surface inside|outside, --header-surface inside|outside
                          override which surfaces meet (give both)
+${FIT_UP_HELP}
 
 Examples:
   girth branch --header "NPS 12 STD" --branch "NPS 6 STD"
   girth branch --header "NPS 12 STD" --branch "NPS 8 STD" --angle 45 --gap 1/16 --svg lat.svg
   girth branch --header "NPS 8 STD" --branch "NPS 2 XS" --offset "2 1/2" --fit set-in --dxf drain.dxf
-  girth branch --units mm --header "DN 300 x 8" --branch "DN 150 x 7.1" --json`,
-  fieldNames: { angleDeg: 'angle', offsetMm: 'offset', gapMm: 'gap', fit: 'fit', header: 'header', branch: 'branch', contact: 'branchSurface' },
+  girth branch --units mm --header "DN 300 x 8" --branch "DN 150 x 7.1" --json
+  girth branch --header "NPS 12 STD" --branch "NPS 6 STD" --ordinates-from short-point --reference-lines --svg tee.svg`,
+  fieldNames: { angleDeg: 'angle', offsetMm: 'offset', gapMm: 'gap', fit: 'fit', header: 'header', branch: 'branch', contact: 'branchSurface', ...FIT_UP_FIELD_NAMES },
   fromOptions: (args) => ({
     joint: 'branch',
     header: requireOption(args, 'header', '"NPS 12 STD"'),
@@ -69,6 +73,7 @@ Examples:
     ...optional('gap', stringOption(args, 'gap')),
     ...optional('branchSurface', optionalChoice(args, 'branch-surface', SURFACES)),
     ...optional('headerSurface', optionalChoice(args, 'header-surface', SURFACES)),
+    ...fitUpFromOptions(args),
   }),
   jobKeys: (k) => ({
     header: k.text(),
@@ -79,26 +84,26 @@ Examples:
     gap: k.length().optional(),
     branchSurface: k.choice(SURFACES).optional(),
     headerSurface: k.choice(SURFACES).optional(),
+    ...fitUpJobKeys(k),
   }),
   layout: (input, ctx, lib) => {
     if ((input.branchSurface === undefined) !== (input.headerSurface === undefined)) {
       const missing = input.branchSurface === undefined ? 'branchSurface' : 'headerSurface';
       throw new GirthError('MISSING_INPUT', ctx.fieldName(missing), `${ctx.fieldName(missing)}: give both branch and header surfaces to override the fit`);
     }
-    return lib.layoutBranch(
-      {
-        header: readPipe(input.header, 'header', ctx),
-        branch: readPipe(input.branch, 'branch', ctx),
-        angleDeg: input.angle ?? 90,
-        offsetMm: readLength(input.offset, 'offset', ctx, { allowNegative: true }) ?? 0,
-        fit: input.fit ?? 'set-on',
-        gapMm: readLength(input.gap, 'gap', ctx) ?? 0,
-        ...(input.branchSurface !== undefined && input.headerSurface !== undefined
-          ? { contact: { branch: input.branchSurface, header: input.headerSurface } }
-          : {}),
-      },
-      { stations: ctx.stations },
-    );
+    const spec = {
+      header: readPipe(input.header, 'header', ctx),
+      branch: readPipe(input.branch, 'branch', ctx),
+      angleDeg: input.angle ?? 90,
+      offsetMm: readLength(input.offset, 'offset', ctx, { allowNegative: true }) ?? 0,
+      fit: input.fit ?? 'set-on',
+      gapMm: readLength(input.gap, 'gap', ctx) ?? 0,
+      ...(input.branchSurface !== undefined && input.headerSurface !== undefined
+        ? { contact: { branch: input.branchSurface, header: input.headerSurface } }
+        : {}),
+    };
+    const check = angleCheckOptions(input, ctx);
+    return applyFitUp(lib, lib.layoutBranch(spec, { stations: ctx.stations }), lib.branchFitUp(spec, check), input, ctx);
   },
   describe: (result, style) => {
     const r = result as BranchLayout;

@@ -7,10 +7,11 @@ import { optionalChoice, requireNumberOption, requireOption, stringOption } from
 import { reportLength } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe } from './read-inputs.js';
+import { angleCheckOptions, applyFitUp, FIT_UP_FIELD_NAMES, FIT_UP_HELP, FIT_UP_OPTIONS, fitUpFromOptions, fitUpJobKeys, type FitUpInput } from './fit-up-options.js';
 import type { WrittenLength } from './types.js';
 
 /** A pipe end cut to meet a plane, as a fitter writes it. */
-export interface CutbackInput {
+export interface CutbackInput extends FitUpInput {
   readonly joint: 'cutback';
   readonly pipe: string;
   readonly angle: number;
@@ -29,6 +30,7 @@ export const cutbackJoint = defineJoint<CutbackInput>({
     angle: { type: 'string' },
     gap: { type: 'string' },
     surface: { type: 'string' },
+    ...FIT_UP_OPTIONS,
   },
   help: `girth cutback: a pipe end cut to meet a flat surface at an angle
 
@@ -36,34 +38,38 @@ export const cutbackJoint = defineJoint<CutbackInput>({
   --angle DEG            angle between the pipe axis and the plane, ${rangeText(JOINT_ANGLE_DEG)}; 90 is square
   --gap LENGTH           root gap square to the plane (default 0)
   --surface od|id        pipe surface laid on the plane (default od)
+${FIT_UP_HELP}
 
 Examples:
   girth cutback --pipe "NPS 6 STD" --angle 60
-  girth cutback --pipe "NPS 4 Sch 80" --angle 30 --gap 3mm --svg vent.svg`,
-  fieldNames: { angleDeg: 'angle', gapMm: 'gap', fitSurface: 'surface', pipe: 'pipe' },
+  girth cutback --pipe "NPS 4 Sch 80" --angle 30 --gap 3mm --svg vent.svg
+  girth cutback --pipe "NPS 6 STD" --angle 45 --ordinates-from short-point --check-run 24`,
+  fieldNames: { angleDeg: 'angle', gapMm: 'gap', fitSurface: 'surface', pipe: 'pipe', ...FIT_UP_FIELD_NAMES },
   fromOptions: (args) => ({
     joint: 'cutback',
     pipe: requireOption(args, 'pipe', '"NPS 6 STD"'),
     angle: requireNumberOption(args, 'angle', '60'),
     ...optional('gap', stringOption(args, 'gap')),
     ...optional('surface', optionalChoice(args, 'surface', FIT_SURFACES)),
+    ...fitUpFromOptions(args),
   }),
   jobKeys: (k) => ({
     pipe: k.text(),
     angle: k.within(JOINT_ANGLE_DEG),
     gap: k.length().optional(),
     surface: k.choice(FIT_SURFACES).optional(),
+    ...fitUpJobKeys(k),
   }),
-  layout: (input, ctx, lib) =>
-    lib.layoutPlaneCut(
-      {
-        pipe: readPipe(input.pipe, 'pipe', ctx),
-        angleDeg: input.angle,
-        gapMm: readLength(input.gap, 'gap', ctx) ?? 0,
-        ...(input.surface !== undefined ? { fitSurface: input.surface } : {}),
-      },
-      { stations: ctx.stations },
-    ),
+  layout: (input, ctx, lib) => {
+    const spec = {
+      pipe: readPipe(input.pipe, 'pipe', ctx),
+      angleDeg: input.angle,
+      gapMm: readLength(input.gap, 'gap', ctx) ?? 0,
+      ...(input.surface !== undefined ? { fitSurface: input.surface } : {}),
+    };
+    const layout = lib.layoutPlaneCut(spec, { stations: ctx.stations });
+    return applyFitUp(lib, layout, lib.planeCutFitUp(spec, angleCheckOptions(input, ctx)), input, ctx);
+  },
   describe: (result, style) => {
     const r = result as PlaneCutLayout;
     return `${r.angleDeg} deg to the plane, gap ${reportLength(r.gapMm, style)}`;

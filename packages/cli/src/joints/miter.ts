@@ -7,10 +7,11 @@ import { numberOption, optionalChoice, requireNumberOption, requireOption, strin
 import { reportAngle, reportLength, reportLengthAtLeast } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe } from './read-inputs.js';
+import { angleCheckOptions, applyFitUp, FIT_UP_FIELD_NAMES, FIT_UP_HELP, FIT_UP_OPTIONS, fitUpFromOptions, fitUpJobKeys, type FitUpInput } from './fit-up-options.js';
 import type { WrittenLength } from './types.js';
 
 /** A segmented (miter) elbow, as a fitter writes it. */
-export interface MiterInput {
+export interface MiterInput extends FitUpInput {
   readonly joint: 'miter';
   readonly pipe: string;
   readonly bend: number;
@@ -37,6 +38,7 @@ export const miterJoint = defineJoint<MiterInput>({
     'radius-nps': { type: 'string' },
     tangent: { type: 'string' },
     surface: { type: 'string' },
+    ...FIT_UP_OPTIONS,
   },
   help: `girth miter: a miter (segmented) elbow
 
@@ -47,6 +49,7 @@ export const miterJoint = defineJoint<MiterInput>({
   --radius-nps X         centreline radius as X times the NPS (1.5 = long radius)
   --tangent LENGTH       straight length added to each end piece (default 0)
   --surface od|id        pipe surface laid on the weld planes (default od)
+${FIT_UP_HELP}
 
 Examples:
   girth miter --pipe "NPS 10 STD" --bend 90 --welds 3 --radius-nps 1.5
@@ -60,6 +63,7 @@ Examples:
     tangentMm: 'tangent',
     fitSurface: 'surface',
     pipe: 'pipe',
+    ...FIT_UP_FIELD_NAMES,
   },
   fromOptions: (args) => ({
     joint: 'miter',
@@ -71,6 +75,7 @@ Examples:
     ...optional('radiusNps', numberOption(args, 'radius-nps')),
     ...optional('tangent', stringOption(args, 'tangent')),
     ...optional('surface', optionalChoice(args, 'surface', FIT_SURFACES)),
+    ...fitUpFromOptions(args),
   }),
   jobKeys: (k) => ({
     pipe: k.text(),
@@ -81,23 +86,23 @@ Examples:
     radiusNps: k.number().optional(),
     tangent: k.length().optional(),
     surface: k.choice(FIT_SURFACES).optional(),
+    ...fitUpJobKeys(k),
   }),
   layout: (input, ctx, lib) => {
     const radiusMm = readLength(input.radius, 'radius', ctx);
     const tangentMm = readLength(input.tangent, 'tangent', ctx);
-    return lib.layoutMiter(
-      {
-        pipe: readPipe(input.pipe, 'pipe', ctx),
-        bendDeg: input.bend,
-        ...(input.welds !== undefined ? { welds: input.welds } : {}),
-        ...(input.pieces !== undefined ? { pieces: input.pieces } : {}),
-        ...(radiusMm !== undefined ? { radiusMm } : {}),
-        ...(input.radiusNps !== undefined ? { radiusNps: input.radiusNps } : {}),
-        ...(tangentMm !== undefined ? { tangentMm } : {}),
-        ...(input.surface !== undefined ? { fitSurface: input.surface } : {}),
-      },
-      { stations: ctx.stations },
-    );
+    const spec = {
+      pipe: readPipe(input.pipe, 'pipe', ctx),
+      bendDeg: input.bend,
+      ...(input.welds !== undefined ? { welds: input.welds } : {}),
+      ...(input.pieces !== undefined ? { pieces: input.pieces } : {}),
+      ...(radiusMm !== undefined ? { radiusMm } : {}),
+      ...(input.radiusNps !== undefined ? { radiusNps: input.radiusNps } : {}),
+      ...(tangentMm !== undefined ? { tangentMm } : {}),
+      ...(input.surface !== undefined ? { fitSurface: input.surface } : {}),
+    };
+    const layout = lib.layoutMiter(spec, { stations: ctx.stations });
+    return applyFitUp(lib, layout, lib.miterFitUp(spec, angleCheckOptions(input, ctx)), input, ctx);
   },
   reportLines: (layout, style) => {
     const result = layout as MiterLayout;
