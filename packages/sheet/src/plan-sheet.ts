@@ -18,6 +18,7 @@ import { planOverlap, type OverlapPlan } from './plan/overlap.js';
 import { hatchLines } from './plan/hatch.js';
 import { planTitleLines } from './plan/title-lines.js';
 import { planTitleBlock, RULE_MM } from './plan/title-block.js';
+import { planFitUpItems } from './plan/fit-up-items.js';
 
 /** Box of the lines of a template (cut, square line, stations, marks), template mm. */
 function geometryBox(template: Template): Box {
@@ -166,6 +167,8 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
   for (const t of numbers) drawing = unionBox(drawing, t.box);
   for (const t of labels) drawing = unionBox(drawing, t.box);
   if (overlap) drawing = unionBox(drawing, growBox(overlap.box, MAX_STROKE_MM / 2));
+  const fitUp = planFitUpItems(template, drawing, [...numbers, ...labels].map((t) => t.box), opts.textScale, centred);
+  drawing = fitUp.drawing;
 
   const title = titleItems(template, opts, drawing);
   const m = opts.marginMm;
@@ -179,6 +182,7 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
     ...(template.kind === 'wrap' ? [{ kind: 'path', role: 'square-line', layer: 'mark', part: template.squareLine } as const] : []),
     ...template.cut.map((part): SheetItem => ({ kind: 'path', role: 'cut', layer: 'cut', part })),
     ...labels.map((t) => centred(t, 'label', true)),
+    ...fitUp.items,
     ...title.items,
   ];
   const plan: SheetPlan = {

@@ -23,6 +23,8 @@ export interface StationOrdinate {
   readonly from: Point2;
   /** On the cut, at the station's girth. */
   readonly to: Point2;
+  /** Which way y runs from the square line toward the cut (+1 up the template, −1 down), even where the two meet. */
+  readonly towardCut: 1 | -1;
 }
 
 /** A template's ordinates as `withFitUp` measured and worded them. */

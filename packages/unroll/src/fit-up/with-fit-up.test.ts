@@ -45,6 +45,12 @@ describe('withFitUp', () => {
     expect(hole.stations).toEqual(layoutBranch(tee, { stations: 16 }).templates[1].stations);
     expect(hole.fitUpLines?.[0]).toMatch(/^Mark the header along its top line/);
     expect(cut.fitUpLines).toEqual(hole.fitUpLines);
+    // The layout's note that the cutback runs from the long point would contradict the table: left out, words and facts alike.
+    const plain = layoutBranch(tee, { stations: 16 }).templates[0];
+    expect(plain.notes.some((n) => n.startsWith('Cutback is measured'))).toBe(true);
+    expect(cut.notes.some((n) => n.startsWith('Cutback is measured'))).toBe(false);
+    expect(cut.notes).toHaveLength(plain.notes.length - 1);
+    expect(cut.facts?.notes).toHaveLength(plain.notes.length - 1);
   });
 
   it('from the long point keeps the cutbacks, heads them by their reference, and draws both lines only when asked', () => {

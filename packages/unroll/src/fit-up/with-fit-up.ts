@@ -53,7 +53,8 @@ export function jointFitUpLines(fitUp: JointFitUp, format: FormatLengthOptions):
  *   stock past the short point, each station's ordinate worded in the job's
  *   unit with the stretch of station line it is measured along (from the
  *   square line to the cut), and the square lines to draw (both when asked,
- *   the short-point line alone when measuring from it);
+ *   the short-point line alone when measuring from it); from the short point
+ *   the layout's note that the cutback runs from the long point is left out;
  * - every template gets the joint's `fitUpLines`, worded in the job's unit;
  * - the result gets `fitUp` (the dimensions, mm) and `ordinatesFrom`.
  * Templates without such a cut (a header hole) keep their stations. Pure.
@@ -102,7 +103,8 @@ function templateWithFitUp(
       const x = girthOf.get(row.n) ?? row.values.girth ?? 0;
       const yRef = depth.longLineYMm + (reference === 'long-point' ? 0 : depth.cutbackDirection * depth.fullDepthMm);
       const yCut = depth.longLineYMm + depth.cutbackDirection * cutback;
-      stations.push({ n: row.n, columnKey: c.key, valueMm, text: formatLength(valueMm, format), from: [x, yRef], to: [x, yCut] });
+      const towardCut = reference === 'long-point' ? depth.cutbackDirection : depth.cutbackDirection === 1 ? -1 : 1;
+      stations.push({ n: row.n, columnKey: c.key, valueMm, text: formatLength(valueMm, format), from: [x, yRef], to: [x, yCut], towardCut });
     });
   }
   const ordinates: TemplateOrdinates = {
@@ -115,5 +117,20 @@ function templateWithFitUp(
     bothLines: both,
     lines: done.columns.map((c) => ordinateReferenceLine(c, format)),
   };
-  return { ...t, stationColumns: done.stationColumns, stations: done.stations, ordinates, fitUpLines };
+  return { ...withoutLongPointNote(t, reference), stationColumns: done.stationColumns, stations: done.stations, ordinates, fitUpLines };
+}
+
+/** Opening of the layouts' note that says the cutback runs from the long point. */
+const LONG_POINT_NOTE = 'Cutback is measured';
+
+/**
+ * From the short point, the template's note saying the cutback is measured
+ * from the long point would contradict its table: it is left out (the
+ * ordinates' own line names the reference). From the long point nothing changes.
+ */
+function withoutLongPointNote(t: Template, reference: OrdinateReference): Template {
+  if (reference === 'long-point') return t;
+  const keep = (text: string): boolean => !text.startsWith(LONG_POINT_NOTE);
+  const facts = t.facts === undefined ? {} : { facts: { ...t.facts, notes: t.facts.notes.filter((line) => keep(line[0]?.kind === 'text' ? line[0].text : '')) } };
+  return { ...t, notes: t.notes.filter(keep), ...facts };
 }
