@@ -112,25 +112,28 @@ export function planStationOrdinates(template: Template, obstacles: readonly Box
     const sides = [x + GAP_MM + asc, x - GAP_MM - desc];
     const lo = Math.min(s.from[1], s.to[1]) + GAP_MM + half;
     const hi = Math.max(s.from[1], s.to[1]) - GAP_MM - half;
-    const along: number[] = [];
+    const within: number[] = [];
     if (lo <= hi) {
       const mid = (lo + hi) / 2;
-      along.push(mid);
+      within.push(mid);
       for (let d = STEP_MM; mid - d >= lo || mid + d <= hi; d += STEP_MM) {
-        if (mid + d <= hi) along.push(mid + d);
-        if (mid - d >= lo) along.push(mid - d);
+        if (mid + d <= hi) within.push(mid + d);
+        if (mid - d >= lo) within.push(mid - d);
       }
     }
     // Past the square-line end, away from the cut.
-    for (let d = GAP_MM; d <= MAX_PAST_MM; d += STEP_MM) along.push(s.from[1] - dir * (d + half));
+    const past: number[] = [];
+    for (let d = GAP_MM; d <= MAX_PAST_MM; d += STEP_MM) past.push(s.from[1] - dir * (d + half));
+    // The right of the line first, along it and then past its end, so each ordinate reads as its own line's;
+    // the left only where the right has no room at all.
+    const tries: [number, number][] = [];
+    for (const bx of sides) for (const cy of [...within, ...past]) tries.push([bx, cy]);
     let placed: { bx: number; cy: number; b: Box } | undefined;
-    search: for (const cy of along) {
-      for (const bx of sides) {
-        const b = turned(bx, cy);
-        if (taken.some((t) => overlaps(t, b)) || cutHitsBox(template.cut, b)) continue;
-        placed = { bx, cy, b };
-        break search;
-      }
+    for (const [bx, cy] of tries) {
+      const b = turned(bx, cy);
+      if (taken.some((t) => overlaps(t, b)) || cutHitsBox(template.cut, b)) continue;
+      placed = { bx, cy, b };
+      break;
     }
     if (placed === undefined) continue;
     taken.push(placed.b);
