@@ -37,6 +37,9 @@ export function layoutReportText(result: LayoutResult, style: ReportStyle, headi
   const own = jointNamed(jointOf(result))?.reportLines?.(result, style) ?? [];
   out.push(...own);
   for (const template of result.templates) out.push('', formatStationTable(template, { format: style.tableFormat, fraction: style.fraction, caution: false }).trimEnd());
+  // The joint's fit-up, worded in the job's unit (every template carries the same lines).
+  const fitUp = result.templates[0]?.fitUpLines ?? [];
+  if (fitUp.length > 0) out.push('', 'Fit-up:', ...fitUp.map((l) => `  ${l}`));
   return out.join('\n') + '\n';
 }
 

@@ -9,7 +9,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { MM_PER_INCH, resolvePipe } from '@girth/pipes';
 import { toResultJson } from '@girth/table';
 import { CAUTION } from '@girth/unroll';
-import { describeResult, layoutBranch } from '@girth/unroll';
+import { describeResult } from '@girth/unroll';
 
 /** How an inch job words its templates: feet-inch-sixteenths first (the CLI's default style). */
 const INCH_WORDS = { units: 'in', lengthFormat: 'ft-in', fraction: 16 } as const;
@@ -18,6 +18,7 @@ import { JOINTS } from './joints/registry.js';
 import { runCaptured, runJson } from './test-support/capture.js';
 import { expectClose } from './test-support/close.js';
 import { exampleArgv, helpExampleLines } from './test-support/help-examples.js';
+import { branchAsCli } from './test-support/as-cli.js';
 import { leftoverTempFiles, listFiles, makeTempDir, removeTempDir } from './test-support/temp-dir.js';
 
 const TEE = ['branch', '--header', 'NPS 12 STD', '--branch', 'NPS 6 STD'] as const;
@@ -118,7 +119,7 @@ describe('--json is the library result contract', () => {
     const json = await runJson([...TEE]);
     const header = resolvePipe('NPS 12 STD', { unit: 'in' });
     const branch = resolvePipe('NPS 6 STD', { unit: 'in' });
-    const library = toResultJson(layoutBranch({ header, branch, angleDeg: 90, offsetMm: 0, fit: 'set-on', gapMm: 0 }, { stations: 16 }), { units: 'in' });
+    const library = toResultJson(branchAsCli({ header, branch, angleDeg: 90, offsetMm: 0, fit: 'set-on', gapMm: 0 }, 16, 'in'), { units: 'in' });
     expect(json).toEqual(JSON.parse(JSON.stringify(library)));
     expectAllFinite(json);
 
@@ -167,7 +168,7 @@ describe('--json is the library result contract', () => {
     const header = resolvePipe('NPS 12 STD', { unit: 'in' });
     const branch = resolvePipe('NPS 6 STD', { unit: 'in' });
     const spec = { header, branch, angleDeg: 60, offsetMm: MM_PER_INCH, fit: 'set-in' as const, gapMm: MM_PER_INCH / 16 };
-    expect(json).toEqual(JSON.parse(JSON.stringify(toResultJson(describeResult(layoutBranch(spec, { stations: 24 }), INCH_WORDS), { units: 'in' }))));
+    expect(json).toEqual(JSON.parse(JSON.stringify(toResultJson(describeResult(branchAsCli(spec, 24, 'in'), INCH_WORDS), { units: 'in' }))));
     expect(template(json, 'branch-cut').stations).toHaveLength(24);
     // An offset branch falls outside B31.3 304.3.1(b): the library warns, and the JSON carries it.
     expect((json.warnings as { code: string }[]).length).toBeGreaterThan(0);
@@ -179,7 +180,7 @@ describe('--json is the library result contract', () => {
     expect(spaced).toEqual(joined);
     const header = resolvePipe('NPS 12 STD', { unit: 'in' });
     const branch = resolvePipe('NPS 6 STD', { unit: 'in' });
-    const library = toResultJson(describeResult(layoutBranch({ header, branch, offsetMm: -MM_PER_INCH }, { stations: 16 }), INCH_WORDS), { units: 'in' });
+    const library = toResultJson(describeResult(branchAsCli({ header, branch, offsetMm: -MM_PER_INCH }, 16, 'in'), INCH_WORDS), { units: 'in' });
     expect(joined).toEqual(JSON.parse(JSON.stringify(library)));
   });
 
@@ -200,7 +201,7 @@ describe('--json is the library result contract', () => {
     expectClose(template(json, 'branch-cut').stretchOut, Math.PI * 168.3, JSON_TOL, 'DN 150 stretch-out');
     const header = resolvePipe('DN 300 x 8', { unit: 'mm' });
     const branch = resolvePipe('DN 150 x 7.1', { unit: 'mm' });
-    expect(json).toEqual(JSON.parse(JSON.stringify(toResultJson(layoutBranch({ header, branch }, { stations: 16 }), { units: 'mm' }))));
+    expect(json).toEqual(JSON.parse(JSON.stringify(toResultJson(branchAsCli({ header, branch }, 16, 'mm'), { units: 'mm' }))));
   });
 
   it('prints the caution on stderr, keeping stdout pure JSON', async () => {

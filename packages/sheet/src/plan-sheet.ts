@@ -19,6 +19,7 @@ import { hatchLines } from './plan/hatch.js';
 import { planTitleLines } from './plan/title-lines.js';
 import { planTitleBlock, RULE_MM } from './plan/title-block.js';
 import { planBevelBands } from './plan/bevel-band.js';
+import { planFitUpItems } from './plan/fit-up-items.js';
 
 /** Box of the lines of a template (cut, square line, stations, marks), template mm. */
 function geometryBox(template: Template): Box {
@@ -172,6 +173,8 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
   // The bevel band (weld prep), under everything else drawn: it never crosses the cut line.
   const band = template.kind === 'wrap' && (template.bands?.length ?? 0) > 0 ? planBevelBands(template.bands ?? [], template.stationLines, drawing.minY) : undefined;
   if (band) drawing = unionBox(drawing, band.box);
+  const fitUp = planFitUpItems(template, drawing, [...numbers, ...labels].map((t) => t.box), opts.textScale, centred);
+  drawing = fitUp.drawing;
 
   const title = titleItems(template, opts, drawing);
   const m = opts.marginMm;
@@ -186,6 +189,7 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
     ...template.cut.map((part): SheetItem => ({ kind: 'path', role: 'cut', layer: 'cut', part })),
     ...labels.map((t) => centred(t, 'label', true)),
     ...(band?.items ?? []),
+    ...fitUp.items,
     ...title.items,
   ];
   const plan: SheetPlan = {

@@ -28,7 +28,18 @@ export interface Box {
 export type SheetLayer = 'cut' | 'mark' | 'text' | 'paper';
 
 /** What a drawn line is for. */
-export type SheetPathRole = 'cut' | 'square-line' | 'station-line' | 'mark' | 'overlap-hatch' | 'overlap-align' | 'title-rule';
+export type SheetPathRole =
+  | 'cut'
+  | 'square-line'
+  | 'station-line'
+  | 'mark'
+  | 'overlap-hatch'
+  | 'overlap-align'
+  | 'title-rule'
+  /** A square line through the long or the short point of a cut (`withFitUp`). */
+  | 'reference-line'
+  /** The stretch of a station measured from the short-point line to the cut. */
+  | 'ordinate-line';
 
 /** What a piece of text is for. */
 export type SheetTextRole =
@@ -43,7 +54,13 @@ export type SheetTextRole =
   | 'caution'
   | 'calibration-caption'
   | 'bevel-band'
-  | 'bevel-band-heading';
+  | 'bevel-band-heading'
+  /** A station's ordinate, written along its station line. */
+  | 'station-ordinate'
+  /** `SQUARE LINE, LONG POINT` or `SQUARE LINE, SHORT POINT`. */
+  | 'reference-label'
+  /** A line of the fit-up block (its heading bold). */
+  | 'fit-up';
 
 /** What a rectangle is for. */
 export type SheetRectRole = 'overlap-tab' | 'calibration-bar';

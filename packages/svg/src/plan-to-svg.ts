@@ -127,6 +127,27 @@ function bevelBandGroup(r: ByRole, frame: Frame, w: NumberWriter): string[] {
   ])];
 }
 
+/** Turns a text item the plan turned (90° counter-clockwise, y-up) about its pivot on the paper. */
+function turn(t: SheetText, frame: Frame, w: NumberWriter): string | undefined {
+  return t.rotateDeg === 90 ? `rotate(-90 ${w.len(frame.x(t.pivot[0]))} ${w.len(frame.y(t.pivot[1]))})` : undefined;
+}
+
+/** Roles of the fit-up's items (`withFitUp`): a sheet without any has no `fit-up` group. */
+const FIT_UP_ROLES = ['reference-line', 'ordinate-line', 'reference-label', 'station-ordinate', 'fit-up'] as const;
+
+/** The fit-up: square lines through the long and short points, the stretches measured from the short point, their labels, each station's ordinate along its line, and the fit-up block. */
+function fitUpGroup(r: ByRole, frame: Frame, w: NumberWriter): string {
+  if (!FIT_UP_ROLES.some((role) => r.paths.has(role) || r.texts.has(role))) return '';
+  const text = (role: string, attrs: Attrs): string[] => (r.texts.get(role) ?? []).map((t) => textNode(t, frame, w, { ...attrs, transform: turn(t, frame, w) }));
+  return el('g', { id: 'fit-up', class: 'fit-up', 'font-family': FONT_FAMILY }, [
+    el('path', { class: 'reference-lines', d: segmentsData(r.paths.get('reference-line') ?? [], frame, w), ...strokeAttrs(w, INK.black, STROKE_MM.squareLine, DASH_MM.marks) }),
+    el('path', { class: 'ordinate-lines', d: segmentsData(r.paths.get('ordinate-line') ?? [], frame, w), ...strokeAttrs(w, INK.dark, STROKE_MM.stations) }),
+    el('g', { class: 'reference-labels', fill: INK.black, stroke: 'none', 'text-anchor': 'middle', 'font-weight': 'bold' }, text('reference-label', {})),
+    el('g', { class: 'station-ordinates', fill: INK.black, stroke: 'none', 'text-anchor': 'middle' }, text('station-ordinate', {})),
+    el('g', { class: 'fit-up-block', fill: INK.black, stroke: 'none' }, (r.texts.get('fit-up') ?? []).map((t) => textNode(t, frame, w, { 'font-weight': t.bold ? 'bold' : undefined }))),
+  ]);
+}
+
 const TITLE_ROLES = ['title-job', 'title-title', 'title-note', 'title-placement', 'title-print'] as const;
 
 function titleBlockGroup(plan: SheetPlan, r: ByRole, frame: Frame, w: NumberWriter): string {
@@ -170,7 +191,9 @@ function calibrationGroup(r: ByRole, frame: Frame, w: NumberWriter): string {
  * coordinates (mm, y-up) are flipped onto the paper (y-down) about the plan's
  * page. Groups with stable ids: `overlap`, `marks`, `stations`, `square-line`,
  * `cut`, `labels`, `title-block`, `calibration` (always present, empty when
- * there is nothing to draw), and `bevel-band` after `labels` only when the plan has one. Numbers are rounded to 0.001 mm (0.00001 in).
+ * there is nothing to draw), `bevel-band` after `labels` only when the plan has one,
+ * and `fit-up` on a sheet whose template carries its fit-up (square lines, station
+ * ordinates, the fit-up block). Numbers are rounded to 0.001 mm (0.00001 in).
  *
  * @param plan - a plan from `planSheet` of `@girth/sheet` (already checked).
  * @returns the SVG document as a string (UTF-8, with an XML declaration).
@@ -208,6 +231,7 @@ export function planToSvg(plan: SheetPlan): string {
         (r.texts.get('label') ?? []).map((t) => textNode(t, frame, w)),
       ),
       ...bevelBandGroup(r, frame, w),
+      fitUpGroup(r, frame, w),
       titleBlockGroup(plan, r, frame, w),
       calibrationGroup(r, frame, w),
     ],

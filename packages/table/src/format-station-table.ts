@@ -54,6 +54,8 @@ export function formatStationTable(template: Template, options: StationTableText
   const line = (r: readonly string[]): string => r.map((cell, c) => cell.padStart(widths[c]!)).join(GAP).trimEnd();
   const out: string[] = [oneLine(String(template.title ?? template.id))];
   if (template.kind === 'wrap') out.push(`Stretch-out: ${tableLength(template.stretchOutMm, options, 'template.stretchOutMm')}`);
+  // With the fit-up applied: the square line the ordinates are measured from, the depth of the cut and the stock past the short point.
+  for (const l of template.ordinates?.lines ?? []) out.push(oneLine(l));
   out.push('', line(cells[0]!), widths.map((w) => '-'.repeat(w)).join(GAP));
   for (const r of cells.slice(1)) out.push(line(r));
   if (options.caution ?? true) out.push('', CAUTION);

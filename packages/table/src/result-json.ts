@@ -3,7 +3,8 @@
  */
 import { GirthError, MM_PER_INCH, requireFinite } from '@girth/pipes';
 import type { LayoutResult, PipeUsed, Template } from '@girth/unroll';
-import { jointFields } from './internal/joint-fields.js';
+import { jointFields, type FieldWriters } from './internal/joint-fields.js';
+import { fitUpFields, templateOrdinatesFields } from './internal/fit-up-json.js';
 import { hasStationValue } from './internal/station-cells.js';
 import { weldPrepFields } from './internal/weld-prep-fields.js';
 import type { PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson, WarningJson } from './types.js';
@@ -32,7 +33,7 @@ function requireList(value: unknown, field: string): readonly unknown[] {
   return value;
 }
 
-function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: string) => number): TemplateJson {
+function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: string) => number, w: FieldWriters): TemplateJson {
   const field = `templates[${i}]`;
   const columns = requireList(t.stationColumns, `${field}.stationColumns`) as Template['stationColumns'];
   for (const c of columns) {
@@ -59,6 +60,7 @@ function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: strin
     title: String(t.title ?? ''),
     ...(t.kind === 'wrap' ? { stretchOut: toUnit(t.stretchOutMm, `${field}.stretchOutMm`) } : {}),
     stations,
+    ...templateOrdinatesFields(t, w, field),
   };
 }
 
@@ -101,6 +103,13 @@ function pipeJson(p: PipeUsed, i: number, toUnit: (mm: unknown, field: string) =
  * leanAroundHeaderDeg, idGirth?, idAxial? }]` for a branch and `squareEnds`
  * (ASME B16.25, recalled) for a miter.
  *
+ * A layout with its fit-up applied (`withFitUp`) adds `ordinatesFrom`
+ * (`long-point` | `short-point`), `fitUp` (the joint's fit-up dimensions,
+ * see docs/contract.md) and, on each template with a cut measured from a
+ * square line, `ordinates: { reference, referenceWords, columns: [{ key,
+ * cutbackKey, heading, fullDepth, stockPastShortPoint, longPointAngleDeg,
+ * shortPointAngleDeg }] }`.
+ *
  * Every number is converted by its quantity: a length (its key has no unit
  * suffix) from mm to `units` (inches by dividing by 25.4 exactly), an angle
  * (key ending in `Deg`) kept in degrees, a count kept as it is; each is
@@ -133,18 +142,18 @@ export function toResultJson(result: LayoutResult, options: ResultJsonOptions): 
   }
   const k = units === 'in' ? 1 / MM_PER_INCH : 1;
   const toUnit = (mm: unknown, field: string): number => denoise(requireFinite(mm, field) * k);
-  const templates = (requireList(result.templates, 'templates') as LayoutResult['templates']).map((t, i) => templateJson(t, i, toUnit));
+  const writers: FieldWriters = {
+    length: toUnit,
+    angle: (deg, field) => denoise(requireFinite(deg, field)),
+    count: (value, field) => requireFinite(value, field),
+  };
+  const templates = (requireList(result.templates, 'templates') as LayoutResult['templates']).map((t, i) => templateJson(t, i, toUnit, writers));
   const pipes = (requireList(result.pipes ?? [], 'pipes') as LayoutResult['pipes']).map((p, i) => pipeJson(p, i, toUnit));
   const warnings: WarningJson[] = (requireList(result.warnings ?? [], 'warnings') as LayoutResult['warnings']).map((w) => ({
     code: String(w.code),
     message: String(w.message),
     ...(w.field === undefined ? {} : { field: String(w.field) }),
   }));
-  const writers = {
-    length: toUnit,
-    angle: (deg: unknown, field: string) => denoise(requireFinite(deg, field)),
-    count: (value: unknown, field: string) => requireFinite(value, field),
-  };
   const own = jointFields(result, writers);
-  return { kind: String(result.kind), units, templates, warnings, pipes, ...own, ...weldPrepFields(result, writers) };
+  return { kind: String(result.kind), units, templates, warnings, pipes, ...own, ...weldPrepFields(result, writers), ...fitUpFields(result, writers) };
 }

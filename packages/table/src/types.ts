@@ -48,6 +48,8 @@ export interface TemplateJson {
   /** For wraps: developed length of the girth, in the result's unit. */
   readonly stretchOut?: number;
   readonly stations: readonly StationJson[];
+  /** With the fit-up applied, on a template with a cut measured from a square line: the reference and each cut column's depth (see docs/contract.md). */
+  readonly ordinates?: unknown;
 }
 
 /** A pipe as the joint used it, lengths in the result's unit. */

@@ -99,4 +99,7 @@ export { miterFitUp } from './fit-up/miter-fit-up.js';
 export type { MiterFitUp, MiterFitUpOptions, MiterJointCheck, StockWeldLine } from './fit-up/miter-fit-up.js';
 export { planeCutFitUp } from './fit-up/plane-cut-fit-up.js';
 export type { PlaneCutFitUp, PlaneCutFitUpOptions } from './fit-up/plane-cut-fit-up.js';
+export { jointFitUpLines, withFitUp } from './fit-up/with-fit-up.js';
+export type { JointFitUp, WithFitUpOptions } from './fit-up/with-fit-up.js';
+export type { StationOrdinate, TemplateOrdinates } from './fit-up/template-ordinates.js';
 export { angleCheckLine, branchFitUpLines, miterFitUpLines, ordinateReferenceLine, planeCutFitUpLines } from './fit-up/fit-up-text.js';

@@ -16,6 +16,9 @@ import type { ConeLayout } from './cone/types.js';
 import type { MiterLayout } from './miter/types.js';
 import type { PlaneCutLayout } from './plane-cut/types.js';
 import type { WeldPrep } from './weld/types.js';
+import type { JointFitUp } from './fit-up/with-fit-up.js';
+import type { OrdinateReference } from './fit-up/ordinate-reference.js';
+import type { TemplateOrdinates } from './fit-up/template-ordinates.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -121,6 +124,10 @@ export interface TemplateBase {
   readonly labels: readonly TemplateLabel[];
   readonly stationColumns: readonly StationColumn[];
   readonly stations: readonly StationRow[];
+  /** The ordinates of its cut(s), from the chosen square line, worded for the job; set by `withFitUp` on templates with a cut measured from a square line. */
+  readonly ordinates?: TemplateOrdinates;
+  /** The joint's fit-up dimensions in the job's unit, one sentence a line; set by `withFitUp`. */
+  readonly fitUpLines?: readonly string[];
 }
 
 /** A template wrapped around a pipe's OD: x is the girth from station 1, y runs along the pipe. */
@@ -199,6 +206,10 @@ export interface LayoutResultBase {
   readonly warnings: readonly GirthWarning[];
   /** The weld preparation, when asked for (see `withBranchWeldPrep` and its siblings); absent otherwise. */
   readonly weldPrep?: WeldPrep;
+  /** The joint's fit-up dimensions (mm, degrees); set by `withFitUp`. */
+  readonly fitUp?: JointFitUp;
+  /** The square line the station tables are measured from; set by `withFitUp` (absent: the long point). */
+  readonly ordinatesFrom?: OrdinateReference;
 }
 
 /**

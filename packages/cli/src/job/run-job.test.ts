@@ -9,7 +9,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { GirthError, MM_PER_INCH, resolvePipe } from '@girth/pipes';
 import { toResultJson } from '@girth/table';
 import { CAUTION } from '@girth/unroll';
-import { layoutBranch } from '@girth/unroll';
+import { branchAsCli } from '../test-support/as-cli.js';
 import { parseJob } from './schema.js';
 import { pieceStem, planJob } from './run-job.js';
 import { runCaptured } from '../test-support/capture.js';
@@ -68,7 +68,7 @@ describe('planJob on the demo job', () => {
   it('lays out the tee exactly as the library does for the same pipes', () => {
     const header = resolvePipe('NPS 12 STD', { unit: 'in' });
     const branch = resolvePipe('NPS 6 STD', { unit: 'in' });
-    const library = layoutBranch({ header, branch, angleDeg: 90, fit: 'set-on' }, { stations: 16 });
+    const library = branchAsCli({ header, branch, angleDeg: 90, fit: 'set-on' }, 16, 'in');
     expect(toResultJson(plan.results[0]!.result, { units: 'in' })).toEqual(toResultJson(library, { units: 'in' }));
   });
 

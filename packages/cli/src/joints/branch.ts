@@ -7,11 +7,12 @@ import { numberOption, optionalChoice, requireOption, stringOption } from '../ar
 import { reportLength } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe } from './read-inputs.js';
+import { angleCheckOptions, applyFitUp, FIT_UP_FIELD_NAMES, FIT_UP_HELP, FIT_UP_OPTIONS, fitUpFromOptions, fitUpJobKeys, type FitUpInput } from './fit-up-options.js';
 import type { WrittenLength } from './types.js';
 import { readGroove, WELD_PREP_FIELD_NAMES, WELD_PREP_OPTIONS, weldPrepFromOptions, weldPrepHelp, weldPrepJobKeys, type WeldPrepInput } from './weld-prep-options.js';
 
 /** A branch on a header, as a fitter writes it. */
-export interface BranchInput extends WeldPrepInput {
+export interface BranchInput extends WeldPrepInput, FitUpInput {
   readonly joint: 'branch';
   readonly header: string;
   readonly branch: string;
@@ -45,6 +46,7 @@ export const branchJoint = defineJoint<BranchInput>({
     'header-surface': { type: 'string' },
     'cut-on': { type: 'string' },
     ...WELD_PREP_OPTIONS,
+    ...FIT_UP_OPTIONS,
   },
   help: `girth branch: a branch on a header (tee, lateral, centred or offset)
 
@@ -61,6 +63,7 @@ export const branchJoint = defineJoint<BranchInput>({
   --cut-on od|id         set-on: cut on the branch OD line and draw the ID line
                          dashed (od), or cut on the ID line (id, default)
 ${weldPrepHelp('the header')}
+${FIT_UP_HELP}
 
 Examples:
   girth branch --header "NPS 12 STD" --branch "NPS 6 STD"
@@ -68,8 +71,9 @@ Examples:
   girth branch --header "NPS 8 STD" --branch "NPS 2 XS" --offset "2 1/2" --fit set-in --dxf drain.dxf
   girth branch --units mm --header "DN 300 x 8" --branch "DN 150 x 7.1" --json
   girth branch --header "NPS 10 XS" --branch "NPS 8 XS" --cut-on od --svg tee.svg
-  girth branch --header "NPS 12 STD" --branch "NPS 6 STD" --angle 45 --groove-angle 45 --land 1/16 --gap 1/8`,
-  fieldNames: { angleDeg: 'angle', offsetMm: 'offset', gapMm: 'gap', fit: 'fit', header: 'header', branch: 'branch', contact: 'branchSurface', cutOn: 'cutOn', ...WELD_PREP_FIELD_NAMES },
+  girth branch --header "NPS 12 STD" --branch "NPS 6 STD" --angle 45 --groove-angle 45 --land 1/16 --gap 1/8
+  girth branch --header "NPS 12 STD" --branch "NPS 6 STD" --ordinates-from short-point --reference-lines --svg tee.svg`,
+  fieldNames: { angleDeg: 'angle', offsetMm: 'offset', gapMm: 'gap', fit: 'fit', header: 'header', branch: 'branch', contact: 'branchSurface', cutOn: 'cutOn', ...WELD_PREP_FIELD_NAMES, ...FIT_UP_FIELD_NAMES },
   fromOptions: (args) => ({
     joint: 'branch',
     header: requireOption(args, 'header', '"NPS 12 STD"'),
@@ -82,6 +86,7 @@ Examples:
     ...optional('headerSurface', optionalChoice(args, 'header-surface', SURFACES)),
     ...optional('cutOn', optionalChoice(args, 'cut-on', CUT_ON)),
     ...weldPrepFromOptions(args),
+    ...fitUpFromOptions(args),
   }),
   jobKeys: (k) => ({
     header: k.text(),
@@ -94,6 +99,7 @@ Examples:
     headerSurface: k.choice(SURFACES).optional(),
     cutOn: k.choice(CUT_ON).optional(),
     ...weldPrepJobKeys(k),
+    ...fitUpJobKeys(k),
   }),
   layout: (input, ctx, lib) => {
     if ((input.branchSurface === undefined) !== (input.headerSurface === undefined)) {
@@ -118,7 +124,8 @@ Examples:
       throw new GirthError('BAD_OPTION', name, `${name}: cutting on the branch OD with the ID line is for a set-on branch with the usual surfaces; leave out the set-in fit and the surface overrides`, input.cutOn);
     }
     const layout = onOd ? lib.layoutBranchCutOnOd(spec, { stations: ctx.stations }) : lib.layoutBranch(spec, { stations: ctx.stations });
-    return groove === undefined ? layout : lib.withBranchWeldPrep(layout, lib.weldPrepForBranch(onOd ? { ...spec, contact: { branch: 'outside', header: 'outside' } } : spec, groove, { stations: ctx.stations }));
+    const prepared = groove === undefined ? layout : lib.withBranchWeldPrep(layout, lib.weldPrepForBranch(onOd ? { ...spec, contact: { branch: 'outside', header: 'outside' } } : spec, groove, { stations: ctx.stations }));
+    return applyFitUp(lib, prepared, lib.branchFitUp(spec, angleCheckOptions(input, ctx)), input, ctx);
   },
   describe: (result, style) => {
     const r = result as BranchLayout;

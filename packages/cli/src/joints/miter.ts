@@ -7,11 +7,12 @@ import { numberOption, optionalChoice, requireNumberOption, requireOption, strin
 import { reportAngle, reportLength, reportLengthAtLeast } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe } from './read-inputs.js';
+import { angleCheckOptions, applyFitUp, FIT_UP_FIELD_NAMES, FIT_UP_HELP, FIT_UP_OPTIONS, fitUpFromOptions, fitUpJobKeys, type FitUpInput } from './fit-up-options.js';
 import type { WrittenLength } from './types.js';
 import { readGroove, WELD_PREP_FIELD_NAMES, WELD_PREP_OPTIONS, weldPrepFromOptions, weldPrepHelp, weldPrepJobKeys, type WeldPrepInput } from './weld-prep-options.js';
 
 /** A segmented (miter) elbow, as a fitter writes it. */
-export interface MiterInput extends WeldPrepInput {
+export interface MiterInput extends WeldPrepInput, FitUpInput {
   readonly joint: 'miter';
   readonly pipe: string;
   readonly bend: number;
@@ -41,6 +42,7 @@ export const miterJoint = defineJoint<MiterInput>({
     surface: { type: 'string' },
     gap: { type: 'string' },
     ...WELD_PREP_OPTIONS,
+    ...FIT_UP_OPTIONS,
   },
   help: `girth miter: a miter (segmented) elbow
 
@@ -54,6 +56,7 @@ export const miterJoint = defineJoint<MiterInput>({
   --gap LENGTH           root gap at each weld, square to the weld plane (default 0);
                          each piece end is set back half of it, the stock is shorter
 ${weldPrepHelp('', true)}
+${FIT_UP_HELP}
 
 Examples:
   girth miter --pipe "NPS 10 STD" --bend 90 --welds 3 --radius-nps 1.5
@@ -70,6 +73,7 @@ Examples:
     pipe: 'pipe',
     gapMm: 'gap',
     ...WELD_PREP_FIELD_NAMES,
+    ...FIT_UP_FIELD_NAMES,
   },
   fromOptions: (args) => ({
     joint: 'miter',
@@ -83,6 +87,7 @@ Examples:
     ...optional('surface', optionalChoice(args, 'surface', FIT_SURFACES)),
     ...optional('gap', stringOption(args, 'gap')),
     ...weldPrepFromOptions(args),
+    ...fitUpFromOptions(args),
   }),
   jobKeys: (k) => ({
     pipe: k.text(),
@@ -95,6 +100,7 @@ Examples:
     surface: k.choice(FIT_SURFACES).optional(),
     gap: k.length().optional(),
     ...weldPrepJobKeys(k),
+    ...fitUpJobKeys(k),
   }),
   layout: (input, ctx, lib) => {
     const radiusMm = readLength(input.radius, 'radius', ctx);
@@ -113,7 +119,8 @@ Examples:
     };
     const groove = readGroove(input, ctx);
     const layout = lib.layoutMiter(spec, { stations: ctx.stations });
-    return groove === undefined ? layout : lib.withMiterWeldPrep(layout, lib.weldPrepForMiter(spec, groove, { stations: ctx.stations }));
+    const prepared = groove === undefined ? layout : lib.withMiterWeldPrep(layout, lib.weldPrepForMiter(spec, groove, { stations: ctx.stations }));
+    return applyFitUp(lib, prepared, lib.miterFitUp(spec, angleCheckOptions(input, ctx)), input, ctx);
   },
   reportLines: (layout, style) => {
     const result = layout as MiterLayout;

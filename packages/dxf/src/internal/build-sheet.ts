@@ -25,16 +25,21 @@ export interface PlanToSheetOptions {
 
 function textEntities(t: SheetText): SheetEntity[] {
   const out: SheetEntity[] = [];
+  const turned = t.rotateDeg === 90;
   t.lines.forEach((line, i) => {
     const safe = dxfSafeText(line);
     if (safe.length === 0) return;
+    // Line i sits i line-heights below the first before turning; turned 90° counter-clockwise about the pivot.
+    const x = t.at[0] - t.pivot[0];
+    const y = t.at[1] - i * t.lineMm - t.pivot[1];
     out.push({
       kind: 'text',
       layer: 'text',
-      at: [t.at[0], t.at[1] - i * t.lineMm],
+      at: turned ? [t.pivot[0] - y, t.pivot[1] + x] : [t.at[0], t.at[1] - i * t.lineMm],
       height: t.capHeightMm,
       text: safe,
       align: t.anchor === 'middle' ? 'center' : 'left',
+      ...(turned ? { rotationDeg: 90 } : {}),
     });
   });
   return out;

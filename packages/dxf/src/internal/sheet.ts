@@ -29,6 +29,8 @@ export type SheetEntity =
       readonly text: string;
       /** `left`: `at` is the left end of the baseline; `center`: `at` is the middle of the baseline. */
       readonly align: 'left' | 'center';
+      /** Turned counter-clockwise about `at`, degrees; absent: 0. */
+      readonly rotationDeg?: number;
     };
 
 /** A whole drawing in the output unit. */

@@ -38,8 +38,8 @@ function draw(d: Drawing, e: SheetEntity): void {
       d.drawCircle(c(e.center[0]), c(e.center[1]), c(e.radius));
       return;
     case 'text':
-      if (e.align === 'center') d.drawText(c(e.at[0]), c(e.at[1]), c(e.height), 0, e.text, 'center', 'baseline');
-      else d.drawText(c(e.at[0]), c(e.at[1]), c(e.height), 0, e.text);
+      if (e.align === 'center') d.drawText(c(e.at[0]), c(e.at[1]), c(e.height), e.rotationDeg ?? 0, e.text, 'center', 'baseline');
+      else d.drawText(c(e.at[0]), c(e.at[1]), c(e.height), e.rotationDeg ?? 0, e.text);
       return;
   }
 }

@@ -88,6 +88,7 @@ function writeEntity(g: Groups, e: SheetEntity): void {
       point(g, e.at[0], e.at[1]);
       g.coord(40, e.height);
       g.push(1, e.text);
+      if (e.rotationDeg !== undefined && e.rotationDeg !== 0) g.coord(50, e.rotationDeg);
       if (e.align === 'center') {
         g.push(72, '1'); // centred horizontally on the baseline (vertical alignment 0, the default)
         point(g, e.at[0], e.at[1], 11);

@@ -52,8 +52,14 @@ export interface ReferencedOrdinates {
 }
 
 const HEADINGS: Readonly<Record<OrdinateReference, Readonly<Record<string, string>>>> = {
-  'long-point': { cutback: 'Cutback from long point', cutbackFar: 'Cutback from long point, far end' },
-  'short-point': { cutback: 'Ordinate from short point', cutbackFar: 'Ordinate from short point, far end' },
+  'long-point': {
+    cutback: 'Cutback, from the square line through the long point',
+    cutbackFar: 'Far-end cutback, from the square line through the long point',
+  },
+  'short-point': {
+    cutback: 'Ordinate, from the square line through the short point',
+    cutbackFar: 'Far-end ordinate, from the square line through the short point',
+  },
 };
 
 /**
