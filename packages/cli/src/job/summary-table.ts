@@ -10,21 +10,23 @@ function describe(result: LayoutResult, style: ReportStyle): string {
 }
 
 /**
- * An aligned table: piece, joint, pipes, figures, templates.
- * @example summaryTable([{ piece: 'SP-03', result }], style)
+ * One piece's row of the summary table: piece, joint, pipes, figures, templates.
+ * @example summaryRow('SP-03', result, style)[1] // 'branch'
  */
-export function summaryTable(rows: readonly { readonly piece: string; readonly result: LayoutResult }[], style: ReportStyle): string {
-  const cells = [
-    ['Piece', 'Joint', 'Pipes', 'Figures', 'Templates'],
-    ...rows.map(({ piece, result }) => [
-      piece,
-      result.kind,
-      result.pipes.map((p) => p.label).join(' / '),
-      describe(result, style),
-      result.templates.map((t) => t.id).join(', '),
-    ]),
-  ];
-  const widths = cells[0]!.map((_, c) => Math.max(...cells.map((row) => row[c]!.length)));
+export function summaryRow(piece: string, result: LayoutResult, style: ReportStyle): readonly string[] {
+  return [piece, result.kind, result.pipes.map((p) => p.label).join(' / '), describe(result, style), result.templates.map((t) => t.id).join(', ')];
+}
+
+/**
+ * The rows of {@link summaryRow} as an aligned table under its heading.
+ * @example alignSummary([summaryRow('SP-03', result, style)])
+ */
+export function alignSummary(rows: readonly (readonly string[])[]): string {
+  const head = ['Piece', 'Joint', 'Pipes', 'Figures', 'Templates'];
+  const widths = head.map((h) => h.length);
+  for (const row of rows) for (let c = 0; c < widths.length; c++) widths[c] = Math.max(widths[c]!, row[c]!.length);
   const line = (row: readonly string[]): string => row.map((cell, c) => cell.padEnd(widths[c]!)).join('  ').trimEnd();
-  return [line(cells[0]!), widths.map((w) => '-'.repeat(w)).join('  '), ...cells.slice(1).map(line)].join('\n');
+  const out = [line(head), widths.map((w) => '-'.repeat(w)).join('  ')];
+  for (const row of rows) out.push(line(row));
+  return out.join('\n');
 }
