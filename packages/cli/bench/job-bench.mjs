@@ -8,7 +8,8 @@
 //     library calls `girth run` makes).
 // Goals (issue 17): 1,000 pieces under 2 s of compute; 100,000 pieces with
 // peak memory under 300 MB (`node bench/job-bench.mjs 100000`).
-// A figure to watch, not a test. Usage: node bench/job-bench.mjs [PIECES] [RUNS]
+// A figure to watch, not a test.
+// Usage: node bench/job-bench.mjs [PIECES] [RUNS] [OUTPUTS, e.g. csv or svg,dxf,csv]
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg, tmpdir } from 'node:os';
@@ -19,6 +20,7 @@ const here = fileURLToPath(new URL('.', import.meta.url));
 const bin = join(here, '..', 'bin', 'girth.js');
 const pieces = Number(process.argv[2] ?? 1000);
 const runs = Number(process.argv[3] ?? (pieces > 10_000 ? 1 : 3));
+const outputs = process.argv[4]?.split(',');
 const demo = JSON.parse(readFileSync(join(here, '..', '..', '..', 'fixtures', 'demo', 'job.json'), 'utf8'));
 
 const tmp = mkdtempSync(join(tmpdir(), 'girth-job-bench-'));
@@ -26,7 +28,7 @@ const jobPath = join(tmp, 'job.json');
 const d = demo.pieces;
 writeFileSync(
   jobPath,
-  JSON.stringify({ ...demo, pieces: Array.from({ length: pieces }, (_, i) => ({ ...d[i % d.length], piece: `SP-${i + 1} ${d[i % d.length].piece}` })) }),
+  JSON.stringify({ ...demo, ...(outputs ? { outputs } : {}), pieces: Array.from({ length: pieces }, (_, i) => ({ ...d[i % d.length], piece: `SP-${i + 1} ${d[i % d.length].piece}` })) }),
 );
 
 const median = (xs) => {
@@ -48,7 +50,7 @@ function timed(args) {
   };
 }
 
-console.log(`job-bench: girth run, ${pieces} pieces (${d.length} joints of the demo job repeated), median of ${runs}; node ${process.version}; ${load()}`);
+console.log(`job-bench: girth run, ${pieces} pieces (${d.length} joints of the demo job repeated), outputs ${outputs?.join(', ') ?? 'svg, dxf, csv'}, median of ${runs}; node ${process.version}; ${load()}`);
 const whole = [];
 for (let i = 0; i < runs; i++) {
   const out = join(tmp, `out-${i}`);

@@ -8,7 +8,9 @@ import { join, relative } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { parseJob } from './schema.js';
 import { planJob, type JobTiming } from './run-job.js';
-import { jobFileSource } from './stream-job.js';
+import { jobFileSource, summaryText } from './stream-job.js';
+import { summaryWidths } from './summary-table.js';
+import { planPieces } from './run-job.js';
 import { SET_MARKER, writeJobFolder } from './write-job-folder.js';
 import { DEMO_JOB } from '../test-support/paths.js';
 import { listFiles, makeTempDir, removeTempDir } from '../test-support/temp-dir.js';
@@ -67,4 +69,26 @@ describe('a job streamed to its folder', () => {
     expect(readdirSync(tmp)).toEqual(['out']);
   });
 
+
+  it('the summary is the same whatever pieces the scratch texts are read back in', async () => {
+    const job = parseJob(manyPieces(8));
+    const widths = summaryWidths();
+    let rowsText = '';
+    let reportsText = '';
+    for (const p of planPieces(job, 'o')) {
+      summaryWidths(p.row, widths);
+      rowsText += `${JSON.stringify(p.row)}\n`;
+      reportsText += `${p.report}\n`;
+    }
+    // Read back 7 characters at a time: rows are cut mid-line, as a 1 MB read can cut them.
+    const inPieces = (text: string) => ({
+      append: async () => undefined,
+      async *read() {
+        for (let i = 0; i < text.length; i += 7) yield text.slice(i, i + 7);
+      },
+    });
+    let summary = '';
+    for await (const part of summaryText(job, widths, inPieces(rowsText), inPieces(reportsText))) summary += part;
+    expect(summary).toBe(planJob(job, 'o').summary);
+  });
 });
