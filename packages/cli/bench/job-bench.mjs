@@ -83,6 +83,6 @@ for (let i = 0; i < runs; i++) {
 }
 const m = (k) => median(splits.map((s) => s[k]));
 console.log(
-  `split (wall ms, this process): start-up ${(startup * 1000).toFixed(0)} (CPU of girth --version), read+check ${m('readMs').toFixed(0)}, layout ${m('layoutMs').toFixed(0)}, export ${m('exportMs').toFixed(0)}, writing ${m('writeMs').toFixed(0)}; CPU ${m('cpuMs').toFixed(0)} ms; ${(m('layoutMs') + m('exportMs')) / pieces} ms a piece laid out and exported; ${load()}`,
+  `split (wall ms, this process): start-up ${(startup * 1000).toFixed(0)} (CPU of girth --version), read+check ${m('readMs').toFixed(0)}, layout ${m('layoutMs').toFixed(0)}, export ${m('exportMs').toFixed(0)}, writing ${m('writeMs').toFixed(0)}; CPU ${m('cpuMs').toFixed(0)} ms; ${((m("layoutMs") + m("exportMs")) / pieces).toFixed(2)} ms a piece laid out and exported; ${load()}`,
 );
 rmSync(tmp, { recursive: true, force: true });
