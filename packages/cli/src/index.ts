@@ -1,7 +1,7 @@
 /**
  * girth: the command line (`runCli` runs it in-process with your own
  * `CliIo`), and the pieces it is built from: job files (`parseJob`,
- * `planJob`), joint inputs (`layoutJoint`), output planning and atomic file
+ * `planJob`, `planPieces` one piece at a time), joint inputs (`layoutJoint`), output planning and atomic file
  * writing. Node only (it reads and writes files); the library packages
  * (@girth/pipes ... @girth/table) are the browser-safe surface.
  *
@@ -35,6 +35,6 @@ export type {
 export { layoutJoint } from './joints/layout-joint.js';
 export { fieldPath, parseJob } from './job/schema.js';
 export type { JobPiece, Job } from './job/schema.js';
-export { pieceStem, planJob } from './job/run-job.js';
-export type { JobPlan } from './job/run-job.js';
+export { pieceStem, planJob, planPieces } from './job/run-job.js';
+export type { JobPlan, JobTiming, PiecePlan } from './job/run-job.js';
 export { checkOutputPath } from './output-paths.js';

@@ -45,4 +45,16 @@ describe('dxfSafeText', () => {
       { numRuns: 500 },
     );
   });
+
+  // The fast paths (plain ASCII; ASCII with the signs written as codes) give what
+  // the general path gives: a trailing line break sends any text down the general
+  // path and, flattened to a space and trimmed, changes nothing else.
+  it('its fast paths agree with the general path', () => {
+    const alphabet = fc.constantFrom('a', 'Z', '7', ' ', '"', "'", '/', '-', '.', '\u00B0', '\u00B1', '\u00D8', '\u00F8', '\u2205', '\u2300', '%', '^', '\u00E9', '\u00BD');
+    fc.assert(
+      fc.property(fc.string({ unit: alphabet, maxLength: 300 }), (s) => dxfSafeText(s) === dxfSafeText(`${s}\n`)),
+      { numRuns: 1000 },
+    );
+    expect(dxfSafeText(' Lateral 45\u00B0, \u00D8 8.625" \u00B1 1/16" ')).toBe('Lateral 45%%d, %%c 8.625" %%p 1/16"');
+  });
 });

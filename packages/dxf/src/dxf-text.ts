@@ -71,6 +71,12 @@ export function dxfSafeText(text: string): string {
     const t = text.trim();
     return t.length <= MAX_TEXT_CHARS ? t : t.slice(0, MAX_TEXT_CHARS).trim();
   }
+  // Plain ASCII with signs written as control codes (a title's "45°"): each sign becomes its code.
+  if (/^[\x20-\x24\x26-\x5D\x5F-\x7E\u00B0\u00B1\u00D8\u00F8\u2205\u2300]*$/.test(text)) {
+    const t = text.trim();
+    const coded = t.replace(/[\u00B0\u00B1\u00D8\u00F8\u2205\u2300]/g, (ch) => CONTROL_CODES[ch]!);
+    if (coded.length <= MAX_TEXT_CHARS) return coded;
+  }
   const flat = flattenControls(text).trim();
   const tokens = [...flat].flatMap(tokensOf);
   let out = '';

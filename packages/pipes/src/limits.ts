@@ -165,6 +165,13 @@ export const LENGTH_MM: Limit = {
   reason: 'longer than 1 km is beyond any piece laid out by template',
 };
 
+/**
+ * Farthest any line or label of a template may lie from its origin, mm (1 km:
+ * beyond any sheet, and far from float trouble). Layouts refuse a joint whose
+ * template would reach past it; the exporters check the same bound.
+ */
+export const TEMPLATE_REACH_MM = 1_000_000;
+
 /** Welds in a miter elbow: 1 to 90 (at 90 welds a 180° return is cut 1° a weld). */
 export const MITER_WELDS: Limit = {
   min: 1,

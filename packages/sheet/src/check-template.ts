@@ -3,11 +3,11 @@
  * within reach, arcs with a radius and a sweep, wraps with their stretch-out,
  * holes with the OD they lie on. Done once, in `planSheet`, for every writer.
  */
-import { GirthError, requireFinite, requireInRange, requirePositive } from '@girth/pipes';
+import { GirthError, requireFinite, requireInRange, requirePositive, TEMPLATE_REACH_MM } from '@girth/pipes';
 import type { PathPart, Point2, Template } from '@girth/unroll';
 
 /** Largest coordinate magnitude accepted, mm (1 km: beyond any sheet, and far from float trouble). */
-export const MAX_COORD_MM = 1_000_000;
+export const MAX_COORD_MM = TEMPLATE_REACH_MM;
 /** Largest label cap height accepted, mm. */
 export const MAX_LABEL_HEIGHT_MM = 200;
 

@@ -1,6 +1,7 @@
 /**
  * A whole job: every piece laid out, every file planned, one summary table.
- * Nothing is written until every piece has been laid out without error.
+ * Pieces are laid out one at a time ({@link planPieces}) so a job of any size
+ * streams; {@link planJob} holds a whole job in memory.
  */
 import { join } from 'node:path';
 import { GirthError } from '@girth/pipes';
@@ -11,7 +12,7 @@ import type { JointContext } from '../joints/types.js';
 import { planOutputs, type OutputStyle } from '../outputs.js';
 import { layoutReportText, REPORT_CAUTION, type ReportStyle } from '../report.js';
 import type { PlannedFile } from '../write-files.js';
-import { summaryTable } from './summary-table.js';
+import { alignSummary, summaryRow } from './summary-table.js';
 import type { Job } from './schema.js';
 
 /** A job laid out: each piece's result and every file to write. */
@@ -49,21 +50,53 @@ export function refuseIdleJobKeys(job: Job): void {
   if (job.dxfVersion !== undefined && job.outputs !== undefined && !job.outputs.includes('dxf')) idle('dxfVersion', 'no DXF is written ("outputs" leaves out "dxf"); add "dxf" to outputs or leave dxfVersion out');
 }
 
-/**
- * Lays out every piece of a job and plans its files in `outDir`.
- * @throws GirthError naming the piece and field at fault (`pieces[2].header`).
- */
-export function planJob(job: Job, outDir: string): JobPlan {
+/** One piece of a job laid out: its result, its files and its lines of the summary. */
+export interface PiecePlan {
+  readonly piece: string;
+  readonly result: LayoutResult;
+  readonly files: readonly PlannedFile[];
+  /** The piece's row of the summary table (piece, joint, pipes, figures, templates). */
+  readonly row: readonly string[];
+  /** The piece's report in the summary (its station tables). */
+  readonly report: string;
+}
+
+/** Time spent in each step of a job, milliseconds, added up over the pieces. */
+export interface JobTiming {
+  layoutMs: number;
+  exportMs: number;
+}
+
+/** What every piece of a job shares: its report style, outputs and file-name stems so far. */
+interface JobStyle {
+  readonly tableFormat: TableLengthFormat;
+  readonly fraction: 8 | 16 | 32;
+  readonly report: ReportStyle;
+  readonly outputs: ReadonlySet<string>;
+}
+
+function jobStyle(job: Job): JobStyle {
   refuseIdleJobKeys(job);
   const tableFormat: TableLengthFormat = job.units === 'mm' ? 'mm' : job.decimal === true ? 'in' : 'ft-in';
   const fraction = job.fraction ?? 16;
-  const report: ReportStyle = { units: job.units, tableFormat, fraction };
-  const outputs = new Set(job.outputs ?? ['svg', 'dxf', 'csv']);
+  return { tableFormat, fraction, report: { units: job.units, tableFormat, fraction }, outputs: new Set(job.outputs ?? ['svg', 'dxf', 'csv']) };
+}
+
+/**
+ * Lays out the pieces of a job one at a time, in order, each with its files
+ * planned in `outDir`: a caller that writes and drops each piece before
+ * asking for the next holds one piece in memory, whatever the job's size.
+ * `timing`, when given, is added to (layout, export).
+ * @throws GirthError naming the piece and field at fault (`pieces[2].header`),
+ *   when that piece is reached; the pieces before it have been yielded.
+ * @example for (const p of planPieces(job, 'out')) await write(p.files)
+ */
+export function* planPieces(job: Job, outDir: string, timing?: JobTiming): Generator<PiecePlan, void, undefined> {
+  const { tableFormat, fraction, report, outputs } = jobStyle(job);
   const stems = new Map<string, number>();
-  const results: { piece: string; result: LayoutResult }[] = [];
-  const files: PlannedFile[] = [];
-  const texts: string[] = [];
-  job.pieces.forEach((piece, i) => {
+  const dxfVersion = job.dxfVersion === 'r12' ? 'R12' : 'AC1021';
+  for (let i = 0; i < job.pieces.length; i++) {
+    const piece = job.pieces[i]!;
     const stem = pieceStem(piece.piece);
     const clash = stems.get(stem);
     if (clash !== undefined) {
@@ -77,32 +110,59 @@ export function planJob(job: Job, outDir: string): JobPlan {
       fieldName: (name) => `pieces[${i}].${name}`,
       describe: { units: job.units, lengthFormat: tableFormat, fraction },
     };
+    const t0 = timing === undefined ? 0 : performance.now();
     const result = layoutJoint(piece, ctx);
-    results.push({ piece: piece.piece, result });
-    const style: OutputStyle = { units: job.units, tableFormat, fraction, dxfVersion: job.dxfVersion === 'r12' ? 'R12' : 'AC1021', job: job.job, piece: piece.piece };
+    const t1 = timing === undefined ? 0 : performance.now();
+    const style: OutputStyle = { units: job.units, tableFormat, fraction, dxfVersion, job: job.job, piece: piece.piece };
     const base = join(outDir, stem);
-    files.push(
-      ...planOutputs(
-        result,
-        {
-          ...(outputs.has('svg') ? { svg: `${base}.svg` } : {}),
-          ...(outputs.has('dxf') ? { dxf: `${base}.dxf` } : {}),
-          ...(outputs.has('csv') ? { csv: `${base}.csv` } : {}),
-        },
-        style,
-      ),
+    const files = planOutputs(
+      result,
+      {
+        ...(outputs.has('svg') ? { svg: `${base}.svg` } : {}),
+        ...(outputs.has('dxf') ? { dxf: `${base}.dxf` } : {}),
+        ...(outputs.has('csv') ? { csv: `${base}.csv` } : {}),
+      },
+      style,
     );
-    texts.push(layoutReportText(result, report, piece.piece));
-  });
-  const summary = [
-    job.job,
-    '',
-    summaryTable(results, report),
-    '',
-    ...texts,
-    REPORT_CAUTION,
-    '',
-  ].join('\n');
+    const text = layoutReportText(result, report, piece.piece);
+    if (timing !== undefined) {
+      timing.layoutMs += t1 - t0;
+      timing.exportMs += performance.now() - t1;
+    }
+    yield { piece: piece.piece, result, files, row: summaryRow(piece.piece, result, report), report: text };
+  }
+}
+
+/**
+ * The head of a job's summary: its title and the table of its pieces. Each
+ * piece's report follows with a newline after it, then {@link SUMMARY_TAIL}.
+ * @example summaryHead(job, rows) + reports.map((r) => `${r}\n`).join('') + SUMMARY_TAIL
+ */
+export function summaryHead(job: Job, rows: readonly (readonly string[])[]): string {
+  return `${job.job}\n\n${alignSummary(rows)}\n\n`;
+}
+
+/** The end of a job's summary: the caution. */
+export const SUMMARY_TAIL = `${REPORT_CAUTION}\n`;
+
+/**
+ * Lays out every piece of a job and plans its files in `outDir`, all held in
+ * memory (a job's stream is {@link planPieces}).
+ * @throws GirthError naming the piece and field at fault (`pieces[2].header`).
+ * @example planJob(parseJob(data), 'out').files.length
+ */
+export function planJob(job: Job, outDir: string): JobPlan {
+  const results: { piece: string; result: LayoutResult }[] = [];
+  const files: PlannedFile[] = [];
+  const rows: (readonly string[])[] = [];
+  const texts: string[] = [];
+  for (const p of planPieces(job, outDir)) {
+    results.push({ piece: p.piece, result: p.result });
+    files.push(...p.files);
+    rows.push(p.row);
+    texts.push(p.report);
+  }
+  const summary = summaryHead(job, rows) + texts.map((t) => `${t}\n`).join('') + SUMMARY_TAIL;
   files.push({ path: join(outDir, 'summary.txt'), content: summary });
   return { results, files, summary };
 }

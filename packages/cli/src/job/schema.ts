@@ -12,9 +12,6 @@ import type { SchemaKit } from '../joints/definition.js';
 import { JOINTS, type JointInput } from '../joints/registry.js';
 import { checkLabel, MAX_LABEL_CHARS } from '../labels.js';
 
-/** Most pieces in one job. */
-export const MAX_JOB_PIECES = 500;
-
 /** Longest note on a piece, characters. */
 export const MAX_NOTE_CHARS = 500;
 
@@ -62,7 +59,7 @@ const JOB_KEYS = {
   fraction: z.union([z.literal(8), z.literal(16), z.literal(32)]).optional(),
   dxfVersion: z.enum(['2007', 'r12']).optional(),
   outputs: z.array(z.enum(['svg', 'dxf', 'csv'])).min(1).optional(),
-  pieces: z.array(piece).min(1).max(MAX_JOB_PIECES),
+  pieces: z.array(piece).min(1),
 };
 const job = z.strictObject(JOB_KEYS);
 
@@ -149,7 +146,6 @@ function toGirthError(issue: Issue, data: unknown): GirthError {
     case 'too_small':
     case 'too_big': {
       if (issue.origin === 'array' && issue.code === 'too_small') return new GirthError('MISSING_INPUT', field, `${field}: give at least ${String(issue.minimum)}`, value);
-      if (issue.origin === 'array') return new GirthError('BAD_JOB', field, `${field}: at most ${String((issue as { maximum?: unknown }).maximum)} in one job; split the job`, value);
       if (issue.origin === 'string' && issue.code === 'too_big') return new GirthError('BAD_TEXT', field, `${field}: at most ${String((issue as { maximum?: unknown }).maximum)} characters`, value);
       return new GirthError('OUT_OF_RANGE', field, `${field}: out of range, got ${quoted(value)}`, value);
     }

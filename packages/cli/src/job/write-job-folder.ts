@@ -23,8 +23,8 @@
  * {@link recoverJobFolder}): it rolls a complete new set forward, otherwise
  * puts the old set back, and removes the staging and the old set.
  */
-import { readdirSync, realpathSync, statSync } from 'node:fs';
-import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
+import { createReadStream, readdirSync, realpathSync, statSync } from 'node:fs';
+import { appendFile, mkdir, open, rename, rm, writeFile } from 'node:fs/promises';
 import { basename, dirname, isAbsolute, join, relative, resolve, sep } from 'node:path';
 import { GirthError } from '@girth/pipes';
 import { fileInTheWay, lstatOrUndefined, statOrUndefined } from '../fs-probe.js';
@@ -51,11 +51,47 @@ export interface JobFolderOptions {
   readonly onNote?: (text: string) => void;
   /** A line of text for the marker (e.g. the job's title). */
   readonly label?: string;
+  /** Most files written at once (default {@link WRITE_CONCURRENCY}). */
+  readonly concurrency?: number;
+}
+
+/** Most files a job writes at once: enough to keep the disk busy, few enough to hold little in memory. */
+export const WRITE_CONCURRENCY = 16;
+
+/** Characters a scratch text holds in memory before it is appended to its file. */
+const SCRATCH_FLUSH_CHARS = 1 << 20;
+
+/**
+ * Where a streamed job writes: files of the set one at a time (each call
+ * returns once fewer than the concurrency limit are in flight, so a producer
+ * that awaits it holds only a few files' text), a file from parts, and
+ * scratch text kept in the staging folder and gone before the set is complete.
+ */
+export interface JobFolderSink {
+  /** Writes one file of the set (its path inside the output folder). */
+  readonly write: (file: PlannedFile) => Promise<void>;
+  /** Writes one file of the set from its parts in order. */
+  readonly writeParts: (path: string, parts: Iterable<string> | AsyncIterable<string>) => Promise<void>;
+  /** A new scratch text (e.g. a summary's tail written before its head is known). */
+  readonly scratch: () => ScratchText;
+}
+
+/** Text kept aside while a job streams: appended to, then read back once in order. */
+export interface ScratchText {
+  readonly append: (text: string) => Promise<void>;
+  readonly read: () => AsyncIterable<string>;
 }
 
 /**
- * Writes `files` (all inside `outDir`) as the complete content of `outDir`,
- * all at once: the folder is absent or holds its old set until the new set is
+ * A job's files produced as they are made: called once with the sink of the
+ * staging folder; the set is complete when it resolves. Should it throw, the
+ * staging folder is removed and the output folder is left as it was.
+ */
+export type JobFileSource = (sink: JobFolderSink) => Promise<void>;
+
+/**
+ * Writes `files` (all inside `outDir`; a list, or a {@link JobFileSource}
+ * that streams them) as the complete content of `outDir`, all at once: the folder is absent or holds its old set until the new set is
  * complete, then holds exactly the new set.
  *
  * Without `force`, `outDir` must not exist or be empty. With `force`, an
@@ -72,20 +108,14 @@ export interface JobFolderOptions {
  */
 export async function writeJobFolder(
   outDir: string,
-  files: readonly PlannedFile[],
+  files: readonly PlannedFile[] | JobFileSource,
   options: JobFolderOptions,
 ): Promise<{ readonly dir: string; readonly count: number }> {
   const field = options.field ?? '--out';
   if (outDir.trim() === '') throw new GirthError('BAD_OPTION', field, `${field}: empty; give the folder for the templates, e.g. ${field} out/`, outDir);
   const dir = targetFolder(outDir, field);
-  const rel = files.map((f) => {
-    const r = relative(resolve(outDir), resolve(f.path));
-    if (r === '' || r.startsWith(`..${sep}`) || r === '..' || isAbsolute(r)) {
-      throw new GirthError('BAD_OPTION', field, `${field}: ${f.path} lies outside ${outDir}`, f.path);
-    }
-    return r;
-  });
-  if (rel.includes(SET_MARKER)) throw new GirthError('BAD_OPTION', field, `${field}: ${SET_MARKER} is Girth's own marker file`, SET_MARKER);
+  const inside = (path: string): string => insidePath(outDir, path, field);
+  if (typeof files !== 'function') for (const f of files) inside(f.path);
   const blocker = fileInTheWay(dirname(dir));
   if (blocker !== undefined) throw new GirthError('BAD_OPTION', field, `${field}: cannot write ${outDir}: ${blocker} is a file, not a folder`, outDir);
 
@@ -120,10 +150,15 @@ export async function writeJobFolder(
     }
     throw asFsError(error, 'write', field, outDir);
   }
+  let count = 0;
+  const sink = stagingSink(staging, inside, options.concurrency ?? WRITE_CONCURRENCY);
   try {
-    await writeAll(staging, rel, files);
-    await writeFile(join(staging, SET_MARKER), markerText(options.label, files.length), { encoding: 'utf8', flag: 'wx' });
+    if (typeof files === 'function') await files(sink);
+    else for (const f of files) await sink.write(f);
+    count = await sink.close();
+    await writeFile(join(staging, SET_MARKER), markerText(options.label, count), { encoding: 'utf8', flag: 'wx' });
   } catch (error) {
+    await sink.settled();
     await rm(staging, { recursive: true, force: true });
     if (madeParent !== undefined) await rm(madeParent, { recursive: true, force: true });
     throw asFsError(error, 'write', field, outDir);
@@ -142,7 +177,7 @@ export async function writeJobFolder(
     await recoverJobFolder(dir).catch(() => undefined);
     throw asFsError(error, 'write', field, outDir);
   }
-  return { dir, count: files.length };
+  return { dir, count };
 }
 
 /**
@@ -207,15 +242,105 @@ function targetFolder(outDir: string, field: string): string {
   return full;
 }
 
-async function writeAll(staging: string, rel: readonly string[], files: readonly PlannedFile[]): Promise<void> {
-  const dirs = new Set(rel.map((r) => dirname(r)).filter((d) => d !== '.'));
-  for (const d of dirs) await mkdir(join(staging, d), { recursive: true });
-  const width = 16;
-  for (let i = 0; i < files.length; i += width) {
-    await Promise.all(
-      files.slice(i, i + width).map((f, k) => writeFile(join(staging, rel[i + k]!), f.content, { encoding: 'utf8', flag: 'wx' })),
-    );
+/** The path of `path` inside `outDir`, refused when it lies outside or is the marker. */
+function insidePath(outDir: string, path: string, field: string): string {
+  const r = relative(resolve(outDir), resolve(path));
+  if (r === '' || r.startsWith(`..${sep}`) || r === '..' || isAbsolute(r)) {
+    throw new GirthError('BAD_OPTION', field, `${field}: ${path} lies outside ${outDir}`, path);
   }
+  if (r === SET_MARKER) throw new GirthError('BAD_OPTION', field, `${field}: ${SET_MARKER} is Girth's own marker file`, SET_MARKER);
+  return r;
+}
+
+/** Writes into the staging folder with at most `width` files in flight; `close` waits for all and returns the count. */
+function stagingSink(staging: string, inside: (path: string) => string, width: number): JobFolderSink & { close(): Promise<number>; settled(): Promise<void> } {
+  const inFlight = new Set<Promise<void>>();
+  const made = new Set<string>(['.']);
+  const scratchPaths: string[] = [];
+  let failure: { error: unknown } | undefined;
+  let count = 0;
+  const folderOf = async (rel: string): Promise<void> => {
+    const d = dirname(rel);
+    if (made.has(d)) return;
+    await mkdir(join(staging, d), { recursive: true });
+    made.add(d);
+  };
+  const settle = async (): Promise<void> => {
+    while (inFlight.size >= width) await Promise.race(inFlight);
+    if (failure !== undefined) throw failure.error;
+  };
+  const start = (work: Promise<void>): void => {
+    const p: Promise<void> = work.then(
+      () => {
+        inFlight.delete(p);
+      },
+      (error: unknown) => {
+        inFlight.delete(p);
+        failure ??= { error };
+      },
+    );
+    inFlight.add(p);
+  };
+  return {
+    async write(file) {
+      const rel = inside(file.path);
+      await settle();
+      await folderOf(rel);
+      count += 1;
+      start(writeFile(join(staging, rel), file.content, { encoding: 'utf8', flag: 'wx' }));
+    },
+    async writeParts(path, parts) {
+      const rel = inside(path);
+      await settle();
+      await folderOf(rel);
+      count += 1;
+      const handle = await open(join(staging, rel), 'wx');
+      try {
+        for await (const part of parts) await handle.write(part);
+      } finally {
+        await handle.close();
+      }
+    },
+    scratch() {
+      const path = join(staging, `${SET_MARKER}-scratch-${scratchPaths.length}`);
+      scratchPaths.push(path);
+      return scratchText(path);
+    },
+    async settled() {
+      await Promise.all(inFlight);
+    },
+    async close() {
+      await Promise.all(inFlight);
+      if (failure !== undefined) throw failure.error;
+      for (const path of scratchPaths) await rm(path, { force: true });
+      return count;
+    },
+  };
+}
+
+/** Text appended to a file in pieces of about a megabyte and read back in order. */
+function scratchText(path: string): ScratchText {
+  let buffered: string[] = [];
+  let size = 0;
+  const flush = async (): Promise<void> => {
+    if (buffered.length === 0) return;
+    const text = buffered.join('');
+    buffered = [];
+    size = 0;
+    await appendFile(path, text, 'utf8');
+  };
+  return {
+    async append(text) {
+      buffered.push(text);
+      size += text.length;
+      if (size >= SCRATCH_FLUSH_CHARS) await flush();
+    },
+    async *read() {
+      await flush();
+      if (lstatOrUndefined(path) === undefined) return;
+      for await (const chunk of createReadStream(path, { encoding: 'utf8', highWaterMark: SCRATCH_FLUSH_CHARS })) yield chunk as string;
+    },
+  };
 }
 
 function markerText(label: string | undefined, count: number): string {

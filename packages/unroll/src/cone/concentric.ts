@@ -10,6 +10,7 @@ import { coneResultBase } from './internal/cone-result.js';
 import { arcExtremePoints, boundsOfPoints } from './internal/plate-frame.js';
 import { resolveCone } from './internal/resolve-cone.js';
 import type { ConcentricConeLayout, ConcentricConePiece, ConeLayoutOptions, ConePattern, ConeSpec } from './types.js';
+import { requireConeWithinReach } from './internal/cone-reach.js';
 
 const RAD = Math.PI / 180;
 
@@ -146,6 +147,7 @@ export function layoutConcentricCone(spec: ConeSpec, options: ConeLayoutOptions 
     });
   }
 
+  requireConeWithinReach(spec, templates);
   return {
     ...coneResultBase(cone, N, k, { large: 2 * Math.PI * meanR, small: 2 * Math.PI * meanr }, templates),
     form: 'concentric',

@@ -12,6 +12,7 @@ import { resolveCone, resolveEccentricOptions, type ResolvedCone } from './inter
 import { subStationsPerStation } from './internal/sub-stations.js';
 import type { ConePiece, EccentricConeLayout, EccentricConeOptions, EccentricConeSpec } from './types.js';
 import { unfoldStrip } from './unfold-strip.js';
+import { requireConeWithinReach } from './internal/cone-reach.js';
 
 const TWO_PI = 2 * Math.PI;
 
@@ -184,6 +185,7 @@ export function layoutEccentricCone(spec: EccentricConeSpec, options: EccentricC
     });
   });
 
+  requireConeWithinReach(spec, templates);
   return {
     ...coneResultBase(cone, N, k, { large: largeGirth, small: smallGirth }, templates),
     form: 'eccentric',

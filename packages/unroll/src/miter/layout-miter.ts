@@ -10,6 +10,7 @@ import { resolveCutStations, type CutLayoutOptions } from '../plane-cut/layout-o
 import { developTwoCutWrap } from './develop-two-cut-wrap.js';
 import { miterPieceText } from './miter-text.js';
 import type { MiterLayout } from './types.js';
+import { requireWithinReach } from '../internal/template-reach.js';
 
 const PIECE_LABELS: readonly WrapLabel[] = [
   { text: 'THROAT', phiRad: 0 },
@@ -79,6 +80,9 @@ export function layoutMiter(spec: MiterSpec, options: CutLayoutOptions = {}): Mi
       );
     }
   }
+
+  const radiusField = spec.radiusMm !== undefined ? 'radiusMm' : 'radiusNps';
+  requireWithinReach(templates, radiusField, spec[radiusField], 'give a smaller centreline radius or more welds');
 
   const pipe: PipeUsed = { role: 'pipe', label: s.pipe.label, odMm: s.pipe.odMm, wallMm: s.pipe.wallMm, idMm: s.pipe.idMm };
   return {
