@@ -89,7 +89,10 @@ function pipeJson(p: PipeUsed, i: number, toUnit: (mm: unknown, field: string) =
  * - `reducer`: `form`, `length`, `apexAngleDeg`, `pattern` (concentric:
  *   `outerRadius`, `innerRadius`, `sweepDeg`, `slantHeight`), `diametersAt`,
  *   `thickness`, `maxInclinationDeg`, `stationCount`, `segmentCount`, `ends`,
- *   `pieces`, and for the eccentric form `seam` and `outline`.
+ *   `pieces`, and for the eccentric form `seam` and `outline`;
+ * - `nozzle`: `offset`, `direction`, `tiltDeg`, `fit`, `gap`,
+ *   `stationCount`, `aroundTapeBound` (the most a straight-pulled tape reads
+ *   under the head hole's `around`).
  *
  * Every number is converted by its quantity: a length (its key has no unit
  * suffix) from mm to `units` (inches by dividing by 25.4 exactly), an angle

@@ -98,3 +98,9 @@ export type { MiterFitUp, MiterFitUpOptions, MiterJointCheck, StockWeldLine } fr
 export { planeCutFitUp } from './fit-up/plane-cut-fit-up.js';
 export type { PlaneCutFitUp, PlaneCutFitUpOptions } from './fit-up/plane-cut-fit-up.js';
 export { angleCheckLine, branchFitUpLines, miterFitUpLines, ordinateReferenceLine, planeCutFitUpLines } from './fit-up/fit-up-text.js';
+
+// A nozzle in a dished head.
+export type { LayoutNozzleOptions, NozzleLayout } from './nozzle/types.js';
+export { layoutNozzle } from './nozzle/layout-nozzle.js';
+export { developHeadHole } from './nozzle/head-hole.js';
+export type { HeadHoleInput } from './nozzle/head-hole.js';

@@ -15,6 +15,7 @@ import type { TemplateFacts } from './facts.js';
 import type { ConeLayout } from './cone/types.js';
 import type { MiterLayout } from './miter/types.js';
 import type { PlaneCutLayout } from './plane-cut/types.js';
+import type { NozzleLayout } from './nozzle/types.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -176,9 +177,10 @@ export interface LayoutResultBase {
 /**
  * What a joint's layout returns, told apart by `kind` (contract values, never
  * renamed): `branch`, `miter`, `plane-cut` (a pipe end cut to a plane) or
- * `reducer` (a cone, concentric or eccentric by its `form`).
+ * `reducer` (a cone, concentric or eccentric by its `form`), `nozzle` (a
+ * nozzle in a dished head).
  */
-export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout;
+export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout;
 
 /** The contract kinds of {@link LayoutResult}. */
 export type LayoutKind = LayoutResult['kind'];
