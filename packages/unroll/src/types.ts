@@ -138,6 +138,8 @@ export interface HoleTemplate extends TemplateBase {
   readonly kind: 'hole';
   /** The OD of the pipe the hole is marked on, mm. */
   readonly wrapOdMm: number;
+  /** How the template is used when it is not laid on a pipe's OD (a hole in a dished head), one sentence in the fitter's words. */
+  readonly placement?: string;
 }
 
 /** A flat pattern cut from plate (cones): plate coordinates. */

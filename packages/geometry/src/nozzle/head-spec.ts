@@ -52,7 +52,7 @@ export function resolveHeadSpec(spec: HeadSpec): ResolvedHeadSpec {
       throw new GirthError('BAD_OPTION', `head.${field}`, `head.${field}: a ${type} head does not take it`, spec[field]);
     }
   };
-  const label = spec.label === undefined ? `${typeWords(type)} head, OD ${formatLengthBoth(pipe.odMm)}` : pipe.label;
+  const label = spec.label === undefined ? `${type === 'ellipsoidal' ? `${spec.ratio ?? DEFAULT_HEAD_RATIO}:1 ellipsoidal` : typeWords(type)} head` : pipe.label;
   const base = { kind: 'head-spec' as const, type, odMm: pipe.odMm, wallMm: pipe.wallMm, idMm: pipe.idMm, label, straightFlangeMm };
   const a = pipe.idMm / 2;
   if (type === 'ellipsoidal' || type === 'hemispherical') {
@@ -90,15 +90,15 @@ export function resolveHeadSpec(spec: HeadSpec): ResolvedHeadSpec {
 function typeWords(type: HeadType): string {
   switch (type) {
     case 'ellipsoidal':
-      return 'Ellipsoidal';
+      return 'ellipsoidal';
     case 'hemispherical':
-      return 'Hemispherical';
+      return 'hemispherical';
     case 'flanged-and-dished':
-      return 'Flanged and dished';
+      return 'flanged and dished';
     case '80-10':
       return '80-10 torispherical';
     case 'torispherical':
-      return 'Torispherical';
+      return 'torispherical';
   }
 }
 

@@ -11,6 +11,8 @@ import { sampleCut } from '../wrap/sample-cut.js';
 
 /** Cap height of the labels on a head-hole template, mm. */
 const LABEL_HEIGHT_MM = 5;
+/** How far outside the hole each station line starts, where its number is written, mm. */
+const STATION_NUMBER_CLEARANCE_MM = 12;
 /** Half the length of each arm of the centre mark, mm. */
 const CENTRE_ARM_MM = 10;
 
@@ -66,7 +68,10 @@ export function developHeadHole(input: HeadHoleInput): { readonly template: Hole
     const around = -tape.aroundMm;
     aroundBoundMm = Math.max(aroundBoundMm, parallelTapeShortfallMm(tape.parallelRadiusMm, around));
     stations.push({ n: i + 1, angleDeg, values: { drop: hit.axialMm - highest, meridian: tape.meridianMm, around } });
-    stationLines.push({ n: i + 1, angleDeg, from: [0, 0], to: seenAlongAxis(hit) });
+    // From just outside the hole (where the number goes) through its edge to the axis.
+    const [x, y] = seenAlongAxis(hit);
+    const out = 1 + STATION_NUMBER_CLEARANCE_MM / Math.max(Math.hypot(x, y), 1e-9);
+    stationLines.push({ n: i + 1, angleDeg, from: [x * out, y * out], to: [0, 0] });
   });
 
   const r = b.radius;
@@ -90,6 +95,7 @@ export function developHeadHole(input: HeadHoleInput): { readonly template: Hole
       notes: words.notes,
       ...(words.facts === undefined ? {} : { facts: words.facts }),
       wrapOdMm: g.spec.head.odMm,
+      placement: 'Set out on a plane square to the nozzle axis (the axis at the centre mark, HEEL outboard), then carry each station down to the head by its drop; or mark by tape from the crown centre.',
       cut: [{ kind: 'polyline', points: outline, closed: true }],
       stationLines,
       marks,

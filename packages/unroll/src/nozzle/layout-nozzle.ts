@@ -3,7 +3,7 @@
  * on the nozzle OD) and the hole (marked on the head by square and by tape).
  */
 import { DEFAULT_STATIONS, GirthError, requireWithin, STATIONS } from '@girth/pipes';
-import { DEFAULT_CHORD_TOLERANCE_MM, solveNozzle, type NozzleSpec } from '@girth/geometry';
+import { solveNozzle, type NozzleSpec } from '@girth/geometry';
 import { developWrap } from '../wrap/develop-wrap.js';
 import { developHeadHole } from './head-hole.js';
 import { headHoleText, nozzleCutText } from './nozzle-text.js';
@@ -44,7 +44,7 @@ export function layoutNozzle(spec: NozzleSpec, options: LayoutNozzleOptions = {}
     geometry: g,
     stations,
     chordToleranceMm: options.chordToleranceMm,
-    text: (bound) => headHoleText(g, bound, options.chordToleranceMm ?? DEFAULT_CHORD_TOLERANCE_MM),
+    text: (bound) => headHoleText(g, bound),
   });
   return {
     kind: 'nozzle',

@@ -16,12 +16,10 @@ function describeNozzleJoint(s: ResolvedNozzleSpec): FactLine {
 function headLine(s: ResolvedNozzleSpec): FactLine {
   const h = s.head;
   const shape =
-    h.ratio !== undefined
-      ? factLine`${h.ratio.toString()}:1 ellipsoidal`
-      : h.crownRadiusMm !== undefined && h.knuckleRadiusMm !== undefined
-        ? factLine`torispherical, inside crown radius ${lengthFact(h.crownRadiusMm)}, knuckle radius ${lengthFact(h.knuckleRadiusMm)}`
-        : textLine('hemispherical');
-  return factLine`Head ${h.label}: ${shape}; OD ${lengthFact(h.odMm)}, wall ${lengthFact(h.wallMm)}, inside depth ${lengthFact(h.insideDepthMm)}, straight flange ${lengthFact(h.straightFlangeMm)}.`;
+    h.crownRadiusMm !== undefined && h.knuckleRadiusMm !== undefined
+      ? factLine` (inside crown radius ${lengthFact(h.crownRadiusMm)}, knuckle radius ${lengthFact(h.knuckleRadiusMm)})`
+      : [];
+  return factLine`Head: ${h.label}${shape}; OD ${lengthFact(h.odMm)}, wall ${lengthFact(h.wallMm)}, inside depth ${lengthFact(h.insideDepthMm)}, straight flange ${lengthFact(h.straightFlangeMm)}.`;
 }
 
 function jointNotes(g: NozzleGeometry): FactLine[] {
@@ -72,16 +70,15 @@ export function nozzleCutText(g: NozzleGeometry, stretchOutMm: number): ReturnTy
  * with a square from the nozzle axis, and with a tape from the crown centre,
  * and the error bound of the tape method.
  * @param aroundBoundMm the most a tape pulled straight reads under `around`, mm.
- * @param chordToleranceMm the chord tolerance of the drawn outline, mm.
- * @example headHoleText(geometry, 0.8, 0.05).notes
+ * @example headHoleText(geometry, 0.8).notes
  */
-export function headHoleText(g: NozzleGeometry, aroundBoundMm: number, chordToleranceMm: number): ReturnType<typeof worded> {
+export function headHoleText(g: NozzleGeometry, aroundBoundMm: number): ReturnType<typeof worded> {
   const face = g.spec.contact.branch === 'inside' ? 'ID' : 'OD';
   return worded({
     title: factLine`Head hole: ${describeNozzleJoint(g.spec)}`,
     notes: [
       ...jointNotes(g),
-      factLine`A head does not roll out flat, so the hole is given two ways. By square: the outline is the hole seen along the nozzle axis (the nozzle ${face}, drawn within ${lengthFact(chordToleranceMm)}); set it out on a plane square to the nozzle axis through the hole's highest point, then carry each station down parallel to the axis by its drop.`,
+      factLine`A head does not roll out flat, so the hole is given two ways. By square: the outline is the hole seen along the nozzle axis (the nozzle ${face}); set it out on a plane square to the nozzle axis through the hole's highest point, then carry each station down parallel to the axis by its drop.`,
       textLine(
         "By tape, from the crown centre (where the vessel axis meets the head's outside): meridian is the length over the head straight out from the crown centre to the station's circle about the vessel axis; " +
           "around is the length along that circle from the reference meridian through the nozzle axis, positive toward station 5's side. " +
