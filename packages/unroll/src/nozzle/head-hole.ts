@@ -82,8 +82,8 @@ export function developHeadHole(input: HeadHoleInput): { readonly template: Hole
   ];
   const h = LABEL_HEIGHT_MM;
   const labels: TemplateLabel[] = [
-    { text: 'HEEL', at: [r + 2 * h, h], heightMm: h },
-    { text: 'TOE', at: [-r - 6 * h, h], heightMm: h },
+    { text: 'HEEL', at: [r + STATION_NUMBER_CLEARANCE_MM + 2 * h, -2 * h], heightMm: h },
+    { text: 'TOE', at: [-r - STATION_NUMBER_CLEARANCE_MM - 4 * h, -2 * h], heightMm: h },
   ];
   const words = input.text(aroundBoundMm);
   return {
