@@ -16,8 +16,10 @@ import { headSurface, resolveHeadSpec } from './head-spec.js';
 import type { BranchFit } from '../branch/types.js';
 import type { NozzleDirection, NozzleGeometry, NozzleSpec, ResolvedHeadSpec, ResolvedNozzleSpec } from './types.js';
 
-/** Generators looked at around the nozzle when checking the hole stays on the dish (every 5°), before the lowest is refined. */
-const CHECK_GENERATORS = 72;
+/** Generators looked at around the nozzle when checking the hole stays on the dish (every 7.5°), before the lowest is refined. */
+const CHECK_GENERATORS = 48;
+/** Golden-section steps refining the lowest point of the hole (the bracket shrinks to 1e-6 of 15°). */
+const LOWEST_POINT_STEPS = 30;
 /** Smallest sine of the angle between a nozzle generator and the head where it meets it: 1°, as for a branch (MIN_JOINT_ANGLE_DEG). */
 const MIN_MEETING_SINE = Math.sin(Math.PI / 180);
 /** Steps of the search for the largest offset that keeps the hole on the dish (for the error message): 2^-40 of the radius. */
@@ -82,7 +84,9 @@ export function solveNozzle(spec: NozzleSpec): NozzleGeometry {
   const place = (offset: number): Placement | undefined => placeNozzle(headOutside, offset, direction, givenTilt);
   const placed = place(offsetMm);
   const frame = placed === undefined ? undefined : bundles(placed, cutRadiusMm);
-  const fits = (f: Frame | undefined): boolean => f !== undefined && staysOnDish(f.bundle, cutHost) && staysOnDish(f.bundle, headOutside);
+  // The cut host is the outside itself for a set-on nozzle with no gap: check it once.
+  const sameHost = cutHost.offsetMm === headOutside.offsetMm;
+  const fits = (f: Frame | undefined): boolean => f !== undefined && staysOnDish(f.bundle, cutHost) && (sameHost || staysOnDish(f.bundle, headOutside));
   if (!fits(frame)) throw offHead(head, nozzle.label, offsetMm, (o) => fits(placeOrUndefined(place(o), cutRadiusMm)));
   const ok = frame as Frame;
   checkMeeting(ok.bundle, cutHost, direction);
@@ -167,7 +171,7 @@ function staysOnDish(bundle: GeneratorBundle, host: HeadSurface): boolean {
   let a = (low - 1) * step;
   let b = (low + 1) * step;
   const g = (Math.sqrt(5) - 1) / 2;
-  for (let i = 0; i < 40; i++) {
+  for (let i = 0; i < LOWEST_POINT_STEPS; i++) {
     const c = b - g * (b - a);
     const e = a + g * (b - a);
     const zc = meetingHeight(bundle, host, c);
