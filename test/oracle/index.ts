@@ -6,3 +6,4 @@ export * from './girth-extreme.js';
 export * from './plane-cut-oracle.js';
 export * from './miter-oracle.js';
 export * from './dihedral-oracle.js';
+export * from './head-oracle.js';

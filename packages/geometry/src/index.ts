@@ -93,3 +93,27 @@ export { weldEndBevel } from './weld/weld-end-bevel.js';
 export type { WeldEndBevel } from './weld/weld-end-bevel.js';
 export { weldPrepWarnings } from './weld/weld-warnings.js';
 export type { WeldPrepWarningCode, WeldPrepWarningOptions, WeldPrepWarningStation } from './weld/weld-warnings.js';
+
+// Dished heads as hosts, and the nozzle joint.
+export { hemisphericalHeadOps } from './surfaces/hemispherical-head.js';
+export type { HemisphericalHeadSurface } from './surfaces/hemispherical-head.js';
+export { ellipsoidalHeadOps } from './surfaces/ellipsoidal-head.js';
+export type { EllipsoidalHeadSurface } from './surfaces/ellipsoidal-head.js';
+export { torisphericalHeadOps, torisphericalShape } from './surfaces/torispherical-head.js';
+export type { TorisphericalHeadSurface, TorisphericalShape } from './surfaces/torispherical-head.js';
+export { headOps, headLocal, headZeroDirection } from './surfaces/head-of-revolution.js';
+export type { HeadSurfaceBase, HeadProfile, HeadLocalPoint, MeridianDistance } from './surfaces/head-of-revolution.js';
+export { headDishDepthMm, headTapePosition, parallelTapeShortfallMm } from './surfaces/heads.js';
+export type { HeadSurface, HeadTapePosition } from './surfaces/heads.js';
+export type { HeadType, HeadSpec, ResolvedHeadSpec, NozzleDirection, NozzleSpec, ResolvedNozzleSpec, NozzleGeometry } from './nozzle/types.js';
+export {
+  resolveHeadSpec,
+  headSurface,
+  DEFAULT_HEAD_RATIO,
+  FD_CROWN_SHARE_OF_OD,
+  FD_KNUCKLE_SHARE_OF_OD,
+  HEAD_80_10_CROWN_SHARE_OF_OD,
+  HEAD_80_10_KNUCKLE_SHARE_OF_OD,
+} from './nozzle/head-spec.js';
+export { solveNozzle } from './nozzle/solve-nozzle.js';
+export type { NozzleWarningCode } from './nozzle/solve-nozzle.js';

@@ -42,6 +42,8 @@ export type GirthErrorCode =
   | 'BRANCH_TOO_LARGE'
   /** A branch offset so far that the branch misses the header. */
   | 'OFFSET_MISSES'
+  /** A nozzle whose hole runs off the dished part of its head (past the knuckle onto the straight flange, or off the head). */
+  | 'NOZZLE_OFF_HEAD'
   /** The pieces do not meet, so there is no cut to lay out. */
   | 'NO_INTERSECTION'
   /** A word that is not one of the allowed ones (a fit, a surface, a unit choice). */

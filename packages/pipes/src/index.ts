@@ -63,6 +63,6 @@ export { schedulesFor, pipesForNps, npsSizes, dnSizes } from './pipe/schedules-f
 
 // Added in this wave: host surfaces, limits, weld preparation, fit-up, typed templates and their wording.
 export { ERROR_CODES } from './codes.js';
-export { BEND_DEG, CHORD_TOLERANCE_MM, CONE_APEX_ANGLE_DEG, DEFAULT_STATIONS, DIAMETER_MM, JOINT_ANGLE_DEG, LENGTH_MM, LIMITS, MITER_WELDS, PLATE_MM, REDUCER_STEP_MM, SHALLOW_CONE_WARN_DEG, STATIONS, TEMPLATE_REACH_MM, WALL_MM, formatPair, isWithin, rangeText, requireWithin } from './limits.js';
+export { BEND_DEG, CHORD_TOLERANCE_MM, CONE_APEX_ANGLE_DEG, DEFAULT_STATIONS, DIAMETER_MM, HEAD_RATIO, JOINT_ANGLE_DEG, LENGTH_MM, LIMITS, MITER_WELDS, NOZZLE_TILT_DEG, PLATE_MM, REDUCER_STEP_MM, SHALLOW_CONE_WARN_DEG, STATIONS, TEMPLATE_REACH_MM, WALL_MM, formatPair, isWithin, rangeText, requireWithin } from './limits.js';
 export type { Limit } from './limits.js';
 export { CAUTION } from './caution.js';

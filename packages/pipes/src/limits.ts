@@ -72,6 +72,32 @@ export const JOINT_ANGLE_DEG: Limit = {
 };
 
 /**
+ * Ratio of an ellipsoidal head, its inside diameter to twice its inside
+ * depth (2 for the common 2:1 head, ASME Section VIII Div. 1 UG-32(d), recalled):
+ * 1 (a hemisphere) to 4 (flatter heads are dished heads of another shape).
+ */
+export const HEAD_RATIO: Limit = {
+  min: 1,
+  max: 4,
+  unit: '',
+  what: 'the head ratio (inside diameter to twice the inside depth)',
+  reason: '1 is a hemisphere; flatter than 4:1 is not an ellipsoidal head the trade forms',
+};
+
+/**
+ * Tilt of a nozzle's axis from the vessel axis, degrees, positive leaning
+ * outboard (away from the head's centre line): −80 to 80. Past 80° the
+ * nozzle lies nearly along the head and its hole runs out of all proportion.
+ */
+export const NOZZLE_TILT_DEG: Limit = {
+  min: -80,
+  max: 80,
+  unit: '°',
+  what: "the nozzle's tilt from the vessel axis",
+  reason: 'past 80° the nozzle lies nearly along the head',
+};
+
+/**
  * Total bend of a miter elbow, degrees: more than 0, at most 180 (a return).
  */
 export const BEND_DEG: Limit = {
@@ -195,6 +221,8 @@ export const LIMITS = {
   coneApexAngleDeg: CONE_APEX_ANGLE_DEG,
   lengthMm: LENGTH_MM,
   miterWelds: MITER_WELDS,
+  headRatio: HEAD_RATIO,
+  nozzleTiltDeg: NOZZLE_TILT_DEG,
 } as const satisfies Readonly<Record<string, Limit>>;
 
 /** True when `value` is inside `limit`. */

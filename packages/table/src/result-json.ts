@@ -93,7 +93,10 @@ function pipeJson(p: PipeUsed, i: number, toUnit: (mm: unknown, field: string) =
  * - `reducer`: `form`, `length`, `apexAngleDeg`, `pattern` (concentric:
  *   `outerRadius`, `innerRadius`, `sweepDeg`, `slantHeight`), `diametersAt`,
  *   `thickness`, `maxInclinationDeg`, `stationCount`, `segmentCount`, `ends`,
- *   `pieces`, and for the eccentric form `seam` and `outline`.
+ *   `pieces`, and for the eccentric form `seam` and `outline`;
+ * - `nozzle`: `offset`, `direction`, `tiltDeg`, `fit`, `gap`,
+ *   `stationCount`, `aroundTapeBound` (the most a straight-pulled tape reads
+ *   under the head hole's `around`).
  *
  * With weld preparation (only then): the cut templates' station columns
  * `dihedral` and `torch` (and `torchTilt` on a header hole), degrees, and

@@ -103,3 +103,9 @@ export { jointFitUpLines, withFitUp } from './fit-up/with-fit-up.js';
 export type { JointFitUp, WithFitUpOptions } from './fit-up/with-fit-up.js';
 export type { StationOrdinate, TemplateOrdinates } from './fit-up/template-ordinates.js';
 export { angleCheckLine, branchFitUpLines, miterFitUpLines, ordinateReferenceLine, planeCutFitUpLines } from './fit-up/fit-up-text.js';
+
+// A nozzle in a dished head.
+export type { LayoutNozzleOptions, NozzleLayout } from './nozzle/types.js';
+export { layoutNozzle } from './nozzle/layout-nozzle.js';
+export { developHeadHole } from './nozzle/head-hole.js';
+export type { HeadHoleInput } from './nozzle/head-hole.js';

@@ -19,6 +19,7 @@ import type { WeldPrep } from './weld/types.js';
 import type { JointFitUp } from './fit-up/with-fit-up.js';
 import type { OrdinateReference } from './fit-up/ordinate-reference.js';
 import type { TemplateOrdinates } from './fit-up/template-ordinates.js';
+import type { NozzleLayout } from './nozzle/types.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -170,6 +171,8 @@ export interface HoleTemplate extends TemplateBase {
   readonly kind: 'hole';
   /** The OD of the pipe the hole is marked on, mm. */
   readonly wrapOdMm: number;
+  /** How the template is used when it is not laid on a pipe's OD (a hole in a dished head), one sentence in the fitter's words. */
+  readonly placement?: string;
 }
 
 /** A flat pattern cut from plate (cones): plate coordinates. */
@@ -215,9 +218,10 @@ export interface LayoutResultBase {
 /**
  * What a joint's layout returns, told apart by `kind` (contract values, never
  * renamed): `branch`, `miter`, `plane-cut` (a pipe end cut to a plane) or
- * `reducer` (a cone, concentric or eccentric by its `form`).
+ * `reducer` (a cone, concentric or eccentric by its `form`), `nozzle` (a
+ * nozzle in a dished head).
  */
-export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout;
+export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout;
 
 /** The contract kinds of {@link LayoutResult}. */
 export type LayoutKind = LayoutResult['kind'];

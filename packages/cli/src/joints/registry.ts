@@ -8,12 +8,13 @@ import { cutbackJoint, type CutbackInput } from './cutback.js';
 import type { JointDefinition } from './definition.js';
 import { miterJoint, type MiterInput } from './miter.js';
 import { reducerJoint, type ReducerInput } from './reducer.js';
+import { nozzleJoint, type NozzleInput } from './nozzle.js';
 
 /** Any joint Girth lays out, as a fitter writes it. */
-export type JointInput = BranchInput | MiterInput | CutbackInput | ReducerInput;
+export type JointInput = BranchInput | MiterInput | CutbackInput | ReducerInput | NozzleInput;
 
 /** The joints, in help order. */
-export const JOINTS: readonly JointDefinition<JointInput>[] = [branchJoint, miterJoint, cutbackJoint, reducerJoint] as unknown as readonly JointDefinition<JointInput>[];
+export const JOINTS: readonly JointDefinition<JointInput>[] = [branchJoint, miterJoint, cutbackJoint, reducerJoint, nozzleJoint] as unknown as readonly JointDefinition<JointInput>[];
 
 /**
  * The joint of that name, or `undefined`.

@@ -5,3 +5,8 @@ export * from './cone.js';
 export * from './table.js';
 export * from './line-intersection.js';
 export * from './grazing.js';
+export * from './head-of-revolution.js';
+export * from './hemispherical-head.js';
+export * from './ellipsoidal-head.js';
+export * from './torispherical-head.js';
+export * from './heads.js';

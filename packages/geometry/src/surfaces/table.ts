@@ -6,15 +6,24 @@ import { GirthError } from '@girth/pipes';
 import { coneOps, type ConeSurface } from './cone.js';
 import { cylinderOps, type CylinderSurface } from './cylinder.js';
 import { planeOps, type PlaneSurface } from './plane.js';
+import { ellipsoidalHeadOps, type EllipsoidalHeadSurface } from './ellipsoidal-head.js';
+import { hemisphericalHeadOps, type HemisphericalHeadSurface } from './hemispherical-head.js';
+import { torisphericalHeadOps, type TorisphericalHeadSurface } from './torispherical-head.js';
 import type { HostShape, SurfaceOps, SurfaceTable } from './types.js';
 
 /**
  * A surface that a pipe end can be cut to meet: one of the kinds in
  * {@link SURFACES}.
  */
-export type HostSurface = CylinderSurface | PlaneSurface | ConeSurface;
+export type HostSurface =
+  | CylinderSurface
+  | PlaneSurface
+  | ConeSurface
+  | HemisphericalHeadSurface
+  | EllipsoidalHeadSurface
+  | TorisphericalHeadSurface;
 
-/** The kinds of {@link HostSurface}: `'cylinder' | 'plane' | 'cone'`. */
+/** The kinds of {@link HostSurface}: `'cylinder' | 'plane' | 'cone'` and the dished heads `'hemispherical-head' | 'ellipsoidal-head' | 'torispherical-head'`. */
 export type HostKind = HostSurface['kind'];
 
 /**
@@ -27,6 +36,9 @@ export const SURFACES: SurfaceTable<HostSurface> = {
   cylinder: cylinderOps,
   plane: planeOps,
   cone: coneOps,
+  'hemispherical-head': hemisphericalHeadOps,
+  'ellipsoidal-head': ellipsoidalHeadOps,
+  'torispherical-head': torisphericalHeadOps,
 };
 
 /** The `surfaces` option: a table of surface operations covering the kinds of `S`. */

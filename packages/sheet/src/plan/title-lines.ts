@@ -51,7 +51,7 @@ function placementLine(template: Template, units: 'mm' | 'in'): string {
         `Stretch-out ${titleLength(template.stretchOutMm, units)}.`
       );
     case 'hole':
-      return `Lay on the ${titleLength(template.wrapOdMm, units)} OD of the pipe it is marked on.`;
+      return template.placement ?? `Lay on the ${titleLength(template.wrapOdMm, units)} OD of the pipe it is marked on.`;
     case 'flat':
       return 'Flat pattern at true size: mark and cut from plate.';
   }

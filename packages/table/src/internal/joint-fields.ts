@@ -4,7 +4,7 @@
  * converted by its quantity: lengths to the result's unit, angles in degrees,
  * counts as they are. Internal to the package; `toResultJson` is the way in.
  */
-import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, PlaneCutLayout } from '@girth/unroll';
+import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, NozzleLayout, PlaneCutLayout } from '@girth/unroll';
 
 /** How the contract writes one number: by its quantity, naming its field in errors. */
 export interface FieldWriters {
@@ -24,6 +24,18 @@ function branchFields(r: BranchLayout, w: FieldWriters): Record<string, unknown>
     fit: String(r.fit),
     contact: { branch: String(r.contact.branch), header: String(r.contact.header) },
     stationCount: w.count(r.stations, 'stations'),
+  };
+}
+
+function nozzleFields(r: NozzleLayout, w: FieldWriters): Record<string, unknown> {
+  return {
+    offset: w.length(r.offsetMm, 'offsetMm'),
+    direction: String(r.direction),
+    tiltDeg: w.angle(r.tiltDeg, 'tiltDeg'),
+    fit: String(r.fit),
+    gap: w.length(r.gapMm, 'gapMm'),
+    stationCount: w.count(r.stations, 'stations'),
+    aroundTapeBound: w.length(r.aroundTapeBoundMm, 'aroundTapeBoundMm'),
   };
 }
 
@@ -144,6 +156,8 @@ export function jointFields(result: LayoutResult, w: FieldWriters): Record<strin
       return miterFields(result, w);
     case 'reducer':
       return coneFields(result, w);
+    case 'nozzle':
+      return nozzleFields(result, w);
     default:
       return {};
   }

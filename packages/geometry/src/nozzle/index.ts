@@ -1,0 +1,3 @@
+export * from './types.js';
+export * from './head-spec.js';
+export * from './solve-nozzle.js';
