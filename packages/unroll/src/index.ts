@@ -98,3 +98,10 @@ export type { MiterFitUp, MiterFitUpOptions, MiterJointCheck, StockWeldLine } fr
 export { planeCutFitUp } from './fit-up/plane-cut-fit-up.js';
 export type { PlaneCutFitUp, PlaneCutFitUpOptions } from './fit-up/plane-cut-fit-up.js';
 export { angleCheckLine, branchFitUpLines, miterFitUpLines, ordinateReferenceLine, planeCutFitUpLines } from './fit-up/fit-up-text.js';
+
+// Cutting-table parts: closed contours and the development surface.
+export type { ClosedPart, Development, DevelopmentSurfaceKind } from './types.js';
+export { closeTemplate, deepestCutbackMm, DEFAULT_STUB_MARGIN_MM } from './closed/close-template.js';
+export type { CloseTemplateOptions } from './closed/close-template.js';
+export { onDevelopmentSurface, developmentNote } from './plate/development-surface.js';
+export type { DevelopmentSurfaceOptions } from './plate/development-surface.js';
