@@ -33,7 +33,7 @@ import type { DxfOptions, DxfWriteOptions } from './types.js';
  */
 export function planToDxf(plan: SheetPlan, options?: DxfWriteOptions): string {
   const o = resolveDxfOptions(options);
-  const sheet = planToSheet(plan, { units: o.units, joinEpsMm: o.joinEpsMm });
+  const sheet = planToSheet(plan, { units: o.units, joinEpsMm: o.joinEpsMm, text: o.text });
   return o.version === 'R12' ? writeR12(sheet) : writeAc1021(sheet);
 }
 
@@ -69,5 +69,5 @@ export function templateToDxf(template: Template, options?: DxfOptions): string 
     // The DXF leaves the paper layer out: not planning it saves the work, and moves nothing else.
     paper: false,
   });
-  return planToDxf(plan, { units: o.units, version: o.version, joinEpsMm: o.joinEpsMm });
+  return planToDxf(plan, { units: o.units, version: o.version, joinEpsMm: o.joinEpsMm, text: o.text });
 }

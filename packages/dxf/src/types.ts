@@ -12,6 +12,13 @@ export type DxfVersion = 'AC1021' | 'R12';
 /** Unit of the coordinates written (and of `$INSUNITS`): millimetres or inches. */
 export type DxfUnits = 'mm' | 'in';
 
+/**
+ * How the DXF carries text: `text` (TEXT entities on the TEXT layer), `none`
+ * (left out, for a table that would choke on text), `stroke` (Girth's
+ * single-stroke font as lines on MARK, for a table that etches or scribes it).
+ */
+export type DxfTextMode = 'text' | 'none' | 'stroke';
+
 /** The three layers Girth writes, by role. */
 export type DxfLayerRole = 'cut' | 'mark' | 'text';
 
@@ -45,7 +52,9 @@ export interface DxfOptions {
   readonly stationNumbers?: boolean;
   /** Path ends closer than this (mm) are joined, (0, 1]; default {@link JOIN_EPS_MM}. */
   readonly joinEpsMm?: number;
+  /** Text as TEXT entities (`'text'`, default), left out (`'none`') or single-stroke lines on MARK (`'stroke'`). */
+  readonly text?: DxfTextMode;
 }
 
 /** Options of {@link planToDxf}: how to write, not what (the plan already holds the text). */
-export type DxfWriteOptions = Pick<DxfOptions, 'units' | 'version' | 'joinEpsMm'>;
+export type DxfWriteOptions = Pick<DxfOptions, 'units' | 'version' | 'joinEpsMm' | 'text'>;
