@@ -52,6 +52,17 @@ export interface DxfOptions {
   readonly stationNumbers?: boolean;
   /** Path ends closer than this (mm) are joined, (0, 1]; default {@link JOIN_EPS_MM}. */
   readonly joinEpsMm?: number;
+  /**
+   * Write the template as closed parts for a cutting table (see `closeTemplate` of
+   * `@girth/unroll`): a wrap becomes one closed contour with a square end; default false.
+   */
+  readonly closedParts?: boolean;
+  /** With `closedParts`: a single-cut wrap's stub length, mm, from the square line to the square end; default the deepest cutback + 50 mm. */
+  readonly stubMm?: number;
+  /** Develop on the OD (`'od'`, default) or on the mid-thickness of a rolled plate (`'mid'`, needs `plateThicknessMm`). */
+  readonly surface?: 'od' | 'mid';
+  /** Thickness of the plate rolled into the pipe, mm, for `surface: 'mid'`. */
+  readonly plateThicknessMm?: number;
   /** Text as TEXT entities (`'text'`, default), left out (`'none`') or single-stroke lines on MARK (`'stroke'`). */
   readonly text?: DxfTextMode;
 }

@@ -47,6 +47,9 @@ export function resolveDxfOptions(options: DxfOptions | undefined): ResolvedDxfO
   if (typeof stationNumbers !== 'boolean') {
     throw new GirthError('BAD_OPTION', 'options.stationNumbers', `options.stationNumbers: expected true or false`, stationNumbers);
   }
+  if (o.closedParts !== undefined && typeof o.closedParts !== 'boolean') {
+    throw new GirthError('BAD_OPTION', 'options.closedParts', 'options.closedParts: expected true or false', o.closedParts);
+  }
   const text = o.text ?? 'text';
   if (text !== 'text' && text !== 'none' && text !== 'stroke') {
     throw new GirthError('BAD_CHOICE', 'options.text', `options.text: must be 'text', 'none' or 'stroke', got '${String(text)}'`, text);
