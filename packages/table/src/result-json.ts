@@ -2,10 +2,10 @@
  * A layout result as the JSON result contract of DESIGN.md.
  */
 import { GirthError, MM_PER_INCH, requireFinite } from '@girth/pipes';
-import type { LayoutResult, PipeUsed, Template } from '@girth/unroll';
+import { describeLine, developmentNote, type Development, type LayoutResult, type PipeUsed, type Template } from '@girth/unroll';
 import { jointFields } from './internal/joint-fields.js';
 import { hasStationValue } from './internal/station-cells.js';
-import type { PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson, WarningJson } from './types.js';
+import type { DevelopmentJson, PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson, WarningJson } from './types.js';
 
 /**
  * Contract numbers are rounded to this many decimals of their unit (1e-6 mm or
@@ -31,7 +31,18 @@ function requireList(value: unknown, field: string): readonly unknown[] {
   return value;
 }
 
-function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: string) => number): TemplateJson {
+function developmentJson(d: Development, field: string, toUnit: (mm: unknown, field: string) => number, units: 'mm' | 'in'): DevelopmentJson {
+  const f = `${field}.development`;
+  return {
+    surface: d.surface,
+    diameter: toUnit(d.diameterMm, `${f}.diameterMm`),
+    od: toUnit(d.odMm, `${f}.odMm`),
+    ...(d.plateThicknessMm === undefined ? {} : { plateThickness: toUnit(d.plateThicknessMm, `${f}.plateThicknessMm`) }),
+    rule: describeLine(developmentNote(d), { units }),
+  };
+}
+
+function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: string) => number, units: 'mm' | 'in'): TemplateJson {
   const field = `templates[${i}]`;
   const columns = requireList(t.stationColumns, `${field}.stationColumns`) as Template['stationColumns'];
   for (const c of columns) {
@@ -57,6 +68,10 @@ function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: strin
     id: String(t.id),
     title: String(t.title ?? ''),
     ...(t.kind === 'wrap' ? { stretchOut: toUnit(t.stretchOutMm, `${field}.stretchOutMm`) } : {}),
+    ...(t.development === undefined ? {} : { development: developmentJson(t.development, field, toUnit, units) }),
+    ...(t.closedPart === undefined
+      ? {}
+      : { closedPart: t.closedPart.stubMm === undefined ? {} : { stub: toUnit(t.closedPart.stubMm, `${field}.closedPart.stubMm`) } }),
     stations,
   };
 }
@@ -123,7 +138,7 @@ export function toResultJson(result: LayoutResult, options: ResultJsonOptions): 
   }
   const k = units === 'in' ? 1 / MM_PER_INCH : 1;
   const toUnit = (mm: unknown, field: string): number => denoise(requireFinite(mm, field) * k);
-  const templates = (requireList(result.templates, 'templates') as LayoutResult['templates']).map((t, i) => templateJson(t, i, toUnit));
+  const templates = (requireList(result.templates, 'templates') as LayoutResult['templates']).map((t, i) => templateJson(t, i, toUnit, units));
   const pipes = (requireList(result.pipes ?? [], 'pipes') as LayoutResult['pipes']).map((p, i) => pipeJson(p, i, toUnit));
   const warnings: WarningJson[] = (requireList(result.warnings ?? [], 'warnings') as LayoutResult['warnings']).map((w) => ({
     code: String(w.code),
