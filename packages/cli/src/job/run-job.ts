@@ -3,12 +3,13 @@
  * Nothing is written until every piece has been laid out without error.
  */
 import { join } from 'node:path';
-import { GirthError } from '@girth/pipes';
+import { GirthError, parseLength } from '@girth/pipes';
 import type { LayoutResult } from '@girth/unroll';
 import type { TableLengthFormat } from '@girth/table';
 import { layoutJoint } from '../joints/layout-joint.js';
 import type { JointContext } from '../joints/types.js';
 import { planOutputs, type OutputStyle } from '../outputs.js';
+import { prepareForCutting, type CuttingSettings } from '../cutting-parts.js';
 import { layoutReportText, REPORT_CAUTION, type ReportStyle } from '../report.js';
 import type { PlannedFile } from '../write-files.js';
 import { summaryTable } from './summary-table.js';
@@ -46,6 +47,9 @@ export function refuseIdleJobKeys(job: Job): void {
   if (job.units === 'mm' && job.decimal !== undefined) idle('decimal', 'millimetres are always decimal; "decimal" is for inches ("units": "in")');
   if (job.units === 'mm' && job.fraction !== undefined) idle('fraction', 'millimetres are not rounded to fractions; "fraction" is for feet-inch output ("units": "in")');
   if (job.decimal === true && job.fraction !== undefined) idle('fraction', 'decimal inches are not rounded to fractions; give "decimal" or "fraction", not both');
+  if (job.stub !== undefined && job.closedParts !== true) idle('stub', 'the stub length is for closed parts; add "closedParts": true or leave stub out');
+  if (job.rolledPlate !== undefined && job.developOn !== 'mid') idle('rolledPlate', 'the plate thickness is for "developOn": "mid"; add it or leave rolledPlate out');
+  if (job.dxfText !== undefined && job.outputs !== undefined && !job.outputs.includes('dxf')) idle('dxfText', 'no DXF is written ("outputs" leaves out "dxf"); add "dxf" to outputs or leave dxfText out');
   if (job.dxfVersion !== undefined && job.outputs !== undefined && !job.outputs.includes('dxf')) idle('dxfVersion', 'no DXF is written ("outputs" leaves out "dxf"); add "dxf" to outputs or leave dxfVersion out');
 }
 
@@ -56,6 +60,15 @@ export function refuseIdleJobKeys(job: Job): void {
 export function planJob(job: Job, outDir: string): JobPlan {
   refuseIdleJobKeys(job);
   const tableFormat: TableLengthFormat = job.units === 'mm' ? 'mm' : job.decimal === true ? 'in' : 'ft-in';
+  const stubMm = job.stub === undefined ? undefined : parseLength(String(job.stub), { unit: job.units, field: 'stub' });
+  const plateMm = job.rolledPlate === undefined ? undefined : parseLength(String(job.rolledPlate), { unit: job.units, field: 'rolledPlate' });
+  const cutting: CuttingSettings = {
+    closedParts: job.closedParts === true,
+    developOn: job.developOn ?? 'od',
+    ...(stubMm === undefined ? {} : { stubMm }),
+    ...(plateMm === undefined ? {} : { plateMm }),
+    fields: { stub: 'stub', plate: 'rolledPlate' },
+  };
   const fraction = job.fraction ?? 16;
   const report: ReportStyle = { units: job.units, tableFormat, fraction };
   const outputs = new Set(job.outputs ?? ['svg', 'dxf', 'csv']);
@@ -77,9 +90,9 @@ export function planJob(job: Job, outDir: string): JobPlan {
       fieldName: (name) => `pieces[${i}].${name}`,
       describe: { units: job.units, lengthFormat: tableFormat, fraction },
     };
-    const result = layoutJoint(piece, ctx);
+    const result = prepareForCutting(layoutJoint(piece, ctx), cutting, job.units);
     results.push({ piece: piece.piece, result });
-    const style: OutputStyle = { units: job.units, tableFormat, fraction, dxfVersion: job.dxfVersion === 'r12' ? 'R12' : 'AC1021', job: job.job, piece: piece.piece };
+    const style: OutputStyle = { units: job.units, tableFormat, fraction, dxfVersion: job.dxfVersion === 'r12' ? 'R12' : 'AC1021', ...(job.dxfText === undefined ? {} : { dxfText: job.dxfText }), job: job.job, piece: piece.piece };
     const base = join(outDir, stem);
     files.push(
       ...planOutputs(
