@@ -87,10 +87,9 @@ export function planToSheet(plan: SheetPlan, o: PlanToSheetOptions): Sheet {
     ...squareLines,
     ...lines,
     ...joinParts(markParts, 'mark', 'template.marks', o.joinEpsMm),
-    ...texts,
   ];
-  // No mark along a cut edge: the table would scribe where it cuts.
-  const entities = clipMarksOnCut(drawn, o.joinEpsMm);
+  // No mark along a cut edge: the table would scribe where it cuts. Text (stroked or not) sits off the lines.
+  const entities = [...clipMarksOnCut(drawn, o.joinEpsMm), ...texts];
   const k = o.units === 'in' ? 1 / MM_PER_INCH : 1;
   return { kind: 'sheet', units: o.units, entities: entities.map((e) => scaleEntity(e, k)) };
 }
