@@ -5,7 +5,7 @@
  * JSON and report all show the same part.
  */
 import { GirthError, type LengthUnit } from '@girth/pipes';
-import { closeTemplate, onDevelopmentSurface, type LayoutResult, type PipeUsed, type Template } from '@girth/unroll';
+import { closeTemplate, describeTemplate, onDevelopmentSurface, type DescribeOptions, type LayoutResult, type PipeUsed, type Template } from '@girth/unroll';
 import { renameField } from './joints/read-inputs.js';
 
 /** What the user asked for, lengths in mm. */
@@ -34,14 +34,14 @@ function fmt(mm: number, units: LengthUnit): string {
 
 /**
  * The result with every template developed and closed as asked; unchanged
- * when nothing was asked.
+ * when nothing was asked. Notes added are worded with `describe` (the job's unit).
  *
  * @throws GirthError naming the option or field: `OUT_OF_RANGE` for a stub not
  *   longer than the cut or a plate thicker than the pipe's wall, `NEGATIVE` for
  *   a plate of no thickness.
  * @example prepareForCutting(result, { closedParts: true, developOn: 'mid', fields: { stub: '--stub', plate: '--plate' } }, 'in')
  */
-export function prepareForCutting(result: LayoutResult, s: CuttingSettings, units: LengthUnit): LayoutResult {
+export function prepareForCutting(result: LayoutResult, s: CuttingSettings, units: LengthUnit, describe: DescribeOptions = { units }): LayoutResult {
   if (!s.closedParts && s.developOn === 'od') return result;
   const rename = (field: string): string | undefined =>
     field === 'options.stubMm' ? s.fields.stub : field === 'options.plateThicknessMm' ? s.fields.plate : undefined;
@@ -62,7 +62,8 @@ export function prepareForCutting(result: LayoutResult, s: CuttingSettings, unit
             plateMm,
           );
         }
-        out = onDevelopmentSurface(out, { surface: 'mid', plateThicknessMm: plateMm });
+        // The rule's note is worded again in the job's unit, as the layout's own notes were.
+        out = describeTemplate(onDevelopmentSurface(out, { surface: 'mid', plateThicknessMm: plateMm }), describe);
       }
       return s.closedParts ? closeTemplate(out, s.stubMm === undefined ? {} : { stubMm: s.stubMm }) : out;
     } catch (e) {

@@ -21,7 +21,7 @@ import { readCommonOptions } from './common-options.js';
  */
 export async function runJointCommand(joint: JointDefinition<JointInput>, args: ParsedArgs, io: CliIo): Promise<void> {
   const settings = readCommonOptions(args);
-  const result = prepareForCutting(layoutJoint(joint.fromOptions(args), settings.ctx), settings.cutting, settings.ctx.units);
+  const result = prepareForCutting(layoutJoint(joint.fromOptions(args), settings.ctx), settings.cutting, settings.ctx.units, settings.ctx.describe);
   const files = planOutputs(result, settings.request, settings.style);
   const written = await writeFilesAtomically(files, { force: settings.force, onNote: io.err });
   if (settings.json) {

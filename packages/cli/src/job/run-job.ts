@@ -90,7 +90,7 @@ export function planJob(job: Job, outDir: string): JobPlan {
       fieldName: (name) => `pieces[${i}].${name}`,
       describe: { units: job.units, lengthFormat: tableFormat, fraction },
     };
-    const result = prepareForCutting(layoutJoint(piece, ctx), cutting, job.units);
+    const result = prepareForCutting(layoutJoint(piece, ctx), cutting, job.units, ctx.describe);
     results.push({ piece: piece.piece, result });
     const style: OutputStyle = { units: job.units, tableFormat, fraction, dxfVersion: job.dxfVersion === 'r12' ? 'R12' : 'AC1021', ...(job.dxfText === undefined ? {} : { dxfText: job.dxfText }), job: job.job, piece: piece.piece };
     const base = join(outDir, stem);

@@ -7,6 +7,7 @@ import { distanceToSegment } from '../internal/test-support/segment-distance.js'
 import { closeTemplate } from '../closed/close-template.js';
 import type { Point2, WrapTemplate } from '../types.js';
 import { onDevelopmentSurface } from './development-surface.js';
+import { describeTemplate } from '../describe-result.js';
 
 const IN = 25.4;
 // ASME B36.10M (recalled, REFERENCES.md): NPS 12 STD OD 12.750 in; NPS 6 STD OD 6.625 in, wall 0.280 in.
@@ -95,6 +96,18 @@ describe('onDevelopmentSurface: the mid-thickness of a rolled plate', () => {
       expect(s.values.girth).toBeCloseTo(hole.stations[i]!.values.girth! * k, 9);
       expect(s.values.axial).toBe(hole.stations[i]!.values.axial);
     });
+  });
+
+  it('restates the stretch-out a layout note gives, and words again in inches', () => {
+    const NPS12 = { odMm: 12.75 * IN, wallMm: 0.375 * IN, label: 'NPS 12 STD' };
+    const cut = layoutBranch({ header: NPS12, branch: { odMm: OD_BRANCH, wallMm: WALL, label: 'NPS 6 STD' } }).templates[0];
+    const mid = onDevelopmentSurface(cut, { surface: 'mid', plateThicknessMm: WALL });
+    const oldText = (Math.PI * OD_BRANCH).toFixed(1);
+    const newText = (Math.PI * (OD_BRANCH - WALL)).toFixed(1);
+    expect(cut.notes.join(' ')).toContain(`${oldText} mm`);
+    expect(mid.notes.join(' ')).not.toContain(`${oldText} mm`);
+    expect(mid.notes.join(' ')).toContain(`${newText} mm`);
+    expect(describeTemplate(mid, { units: 'in' }).notes.at(-1)).toMatch(/^Cut flat from 0\.280" \(7\.1 mm\) plate/);
   });
 
   it('refuses a missing, negative or too thick plate, naming the option', () => {

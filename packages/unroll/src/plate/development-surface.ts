@@ -46,7 +46,8 @@ function scalePart(part: PathPart, k: number): PathPart {
  * `girth` column and the stretch-out are multiplied by (OD - t) / OD for the
  * mid-thickness surface of a plate of thickness t (common practice: the
  * neutral surface of a rolled plate is at mid-thickness, so a part cut to this
- * development and rolled closes on the pipe at its OD). Chords shrink with x,
+ * development and rolled closes on the pipe at its OD). A note giving the old
+ * stretch-out gives the new one. Chords shrink with x,
  * so the chord tolerance still holds. A note stating the rule is added, and
  * `development` set for the JSON. `'od'` returns the template with
  * `development` set and no other change. Flat patterns (cones) carry their own
@@ -82,6 +83,11 @@ export function onDevelopmentSurface(template: Template, options: DevelopmentSur
   const k = diameterMm / (template.development?.diameterMm ?? odMm);
   const development: Development = { surface, diameterMm, odMm, plateThicknessMm: t };
   const note = developmentNote(development);
+  // A note that states the old stretch-out (the layout's "stretch-out ..." line) states the new one.
+  const oldStretchMm = template.kind === 'wrap' ? template.stretchOutMm : undefined;
+  const restate = (line: FactLine): FactLine =>
+    line.map((f) => (f.kind === 'length' && oldStretchMm !== undefined && Math.abs(f.mm - oldStretchMm) <= 1e-9 * oldStretchMm ? lengthFact(f.mm * k) : f));
+  const factNotes = template.facts?.notes.map(restate);
   const girthKeys = new Set(template.stationColumns.filter((c) => c.key === 'girth').map((c) => c.key));
   const base = {
     cut: template.cut.map((p) => scalePart(p, k)),
@@ -92,8 +98,8 @@ export function onDevelopmentSurface(template: Template, options: DevelopmentSur
       ...s,
       values: Object.fromEntries(Object.entries(s.values).map(([key, v]) => [key, girthKeys.has(key) ? v * k : v])),
     })),
-    notes: [...template.notes, describeLine(note)],
-    ...(template.facts === undefined ? {} : { facts: { ...template.facts, notes: [...template.facts.notes, note] } }),
+    notes: [...(factNotes === undefined ? template.notes : factNotes.map((l) => describeLine(l))), describeLine(note)],
+    ...(template.facts === undefined || factNotes === undefined ? {} : { facts: { ...template.facts, notes: [...factNotes, note] } }),
     development,
   };
   if (template.kind === 'wrap') {
