@@ -3,7 +3,7 @@
  * tables, all planned in memory before anything is written.
  */
 import { basename, dirname, extname, join } from 'node:path';
-import { templateToDxf, type DxfVersion } from '@girth/dxf';
+import { templateToDxf, type DxfTextMode, type DxfVersion } from '@girth/dxf';
 import type { LengthUnit } from '@girth/pipes';
 import { templateToSvg } from '@girth/svg';
 import { stationTableCsv, type TableLengthFormat } from '@girth/table';
@@ -24,6 +24,8 @@ export interface OutputStyle {
   readonly tableFormat: TableLengthFormat;
   readonly fraction: 8 | 16 | 32;
   readonly dxfVersion: DxfVersion;
+  /** DXF text as TEXT, left out or single strokes on MARK; default TEXT. */
+  readonly dxfText?: DxfTextMode;
   readonly job?: string;
   readonly piece?: string;
 }
@@ -61,7 +63,7 @@ export function planOutputs(result: LayoutResult, request: OutputRequest, style:
       files.push({
         option: '--dxf',
         path: templatePath(request.dxf, template, count),
-        content: templateToDxf(template, { units: style.units, version: style.dxfVersion, ...labels }),
+        content: templateToDxf(template, { units: style.units, version: style.dxfVersion, ...(style.dxfText === undefined ? {} : { text: style.dxfText }), ...labels }),
       });
     }
   }

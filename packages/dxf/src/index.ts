@@ -9,7 +9,7 @@
  * @module @girth/dxf
  */
 
-export type { DxfVersion, DxfUnits, DxfLayerRole, DxfLayer, DxfOptions, DxfWriteOptions } from './types.js';
+export type { DxfVersion, DxfUnits, DxfLayerRole, DxfLayer, DxfOptions, DxfWriteOptions, DxfTextMode } from './types.js';
 export { DXF_LAYERS, DXF_LAYER_ORDER } from './layers.js';
 export {
   JOIN_EPS_MM,

@@ -35,11 +35,15 @@ function throwsGirth(fn: () => unknown, code: string, field?: string | RegExp): 
 describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
   const opts = (o: DxfOptions = {}): DxfOptions => ({ version, ...o });
 
-  it('writes $INSUNITS and the three layers with explicit colours', () => {
-    // $INSUNITS 4 = millimetres, 1 = inches (AutoCAD DXF Reference, HEADER section; recalled).
-    for (const [units, code] of [['mm', 4], ['in', 1]] as const) {
-      const dxf = parseDxf(templateToDxf(teeHole(NPS12_OD_MM, NPS6_STD_ID_MM), opts({ units })));
-      expect(dxf.header['$INSUNITS']).toBe(code);
+  it('says the unit as the version defines it, and writes the three layers with explicit colours', () => {
+    // $INSUNITS 4 = millimetres, 1 = inches; $MEASUREMENT 1 metric, 0 English; both from R14/2000 on, neither in R12
+    // (AutoCAD DXF Reference, HEADER section; recalled; ezdxf's header variable table gives both mindxf DXF2000).
+    for (const [units, code, measurement, words] of [['mm', 4, 1, 'millimetres'], ['in', 1, 0, 'inches']] as const) {
+      const text = templateToDxf(teeHole(NPS12_OD_MM, NPS6_STD_ID_MM), opts({ units }));
+      const dxf = parseDxf(text);
+      expect(dxf.header['$INSUNITS']).toBe(version === 'R12' ? undefined : code);
+      expect(dxf.header['$MEASUREMENT']).toBe(version === 'R12' ? undefined : measurement);
+      if (version === 'R12') expect(text.startsWith(`999\r\nGirth flat pattern, units: ${words}\r\n`)).toBe(true);
       const layers = dxf.tables.layer.layers;
       for (const layer of Object.values(DXF_LAYERS)) expect(layers[layer.name]?.colorIndex).toBe(layer.colorAci);
     }
@@ -127,8 +131,9 @@ describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
   it('puts station lines and the square line on MARK, labels, numbers, title and caution on TEXT', () => {
     const dxf = parseDxf(templateToDxf(planeCutWrap(NPS6_OD_MM, 22.5), opts({ job: 'J-4471', piece: 'SP-09' })));
     const counts = countByLayer(dxf);
-    // 16 stations, the first of zero length at the heel (not drawn), + square line + seam mark.
-    expect(counts['MARK:LINE']).toBe(15 + 1 + 1);
+    // 16 stations, the first of zero length at the heel (not drawn), + square line; the seam mark has no length
+    // here (the cut is back at 0 at 360°) and sits on the cut's end, so it is not drawn either.
+    expect(counts['MARK:LINE']).toBe(15 + 1);
     const texts = dxf.entities.filter((e) => e.type === 'TEXT').map((e) => (e as unknown as { text: string }).text);
     expect(texts).toContain('HEEL');
     expect(texts).toContain('16');
@@ -237,7 +242,7 @@ describe('templateToDxf, checked by ezdxf', () => {
     for (const [key, report] of Object.entries(reports)) {
       expect(report.hasErrors, `${key}: ${report.errors.join('; ')}`).toBe(false);
       expect(report.dxfversion, key).toBe(key.includes('R12') ? 'AC1009' : 'AC1021');
-      expect(report.insunits, key).toBe(key.endsWith('-in') ? 1 : 4);
+      expect(report.insunits, key).toBe(key.includes('R12') ? null : key.endsWith('-in') ? 1 : 4);
       for (const layer of Object.values(DXF_LAYERS)) expect(report.layers[layer.name], `${key} ${layer.name}`).toBe(layer.colorAci);
       const polylineType = key.includes('R12') ? 'POLYLINE' : 'LWPOLYLINE';
       expect(report.counts[polylineType], key).toBe(1);

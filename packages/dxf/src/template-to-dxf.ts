@@ -2,7 +2,7 @@
  * The DXF exporter's entry points: a template, or a sheet plan, to the text of a DXF file.
  */
 import { planSheet, type SheetPlan } from '@girth/sheet';
-import type { Template } from '@girth/unroll';
+import { closeTemplate, onDevelopmentSurface, type Template } from '@girth/unroll';
 import { planToSheet } from './internal/build-sheet.js';
 import { DEFAULT_TEXT_HEIGHT_MM, resolveDxfOptions } from './internal/options.js';
 import { writeAc1021 } from './internal/write-ac1021.js';
@@ -33,7 +33,7 @@ import type { DxfOptions, DxfWriteOptions } from './types.js';
  */
 export function planToDxf(plan: SheetPlan, options?: DxfWriteOptions): string {
   const o = resolveDxfOptions(options);
-  const sheet = planToSheet(plan, { units: o.units, joinEpsMm: o.joinEpsMm });
+  const sheet = planToSheet(plan, { units: o.units, joinEpsMm: o.joinEpsMm, text: o.text });
   return o.version === 'R12' ? writeR12(sheet) : writeAc1021(sheet);
 }
 
@@ -45,14 +45,20 @@ export function planToDxf(plan: SheetPlan, options?: DxfWriteOptions): string {
  * @param options units (`'mm'` default, or `'in'`: coordinates divided by 25.4),
  *   version (`'AC1021'` default, or `'R12'`), job and piece text, title text cap
  *   height (0, 100] mm (default that of the sheet, 2.92 mm; the rest of the title
- *   block scales with it), station numbers on/off, join tolerance (0, 1] mm.
+ *   block scales with it), station numbers on/off, join tolerance (0, 1] mm;
+ *   for a cutting table: `closedParts` (every part one closed contour, `stubMm`
+ *   the stub of a single-cut wrap), `surface: 'mid'` with `plateThicknessMm`
+ *   (developed on the mid-thickness of a rolled plate; the sheet's notes say
+ *   so), `text` (`'text'`, `'none'`, or `'stroke'` single-stroke lines on MARK).
  * @returns the whole DXF file as a string, ending in `EOF` and a line break.
  *   Nothing is written anywhere; the caller saves it.
  * @throws GirthError `NOT_A_NUMBER` / `NOT_FINITE` for a NaN or infinite
  *   coordinate, `OUT_OF_RANGE` for a coordinate beyond 1 km, a zero radius or
  *   a degenerate polyline, `EMPTY_INPUT` when there is nothing to cut,
  *   `BAD_OPTION` for unknown options values; the field names the culprit, e.g.
- *   `template.cut[0].points[17][1]`.
+ *   `template.cut[0].points[17][1]`; `OUT_OF_RANGE` (`options.stubMm`) for a stub
+ *   not longer than the cut; `MISSING_INPUT` / `NEGATIVE` / `WALL_TOO_THICK`
+ *   (`options.plateThicknessMm`) for a missing or impossible plate.
  * @example
  * ```ts
  * const dxf = templateToDxf(template, { units: 'in', version: 'R12', job: 'J-2291', piece: 'SP-14' });
@@ -60,7 +66,10 @@ export function planToDxf(plan: SheetPlan, options?: DxfWriteOptions): string {
  */
 export function templateToDxf(template: Template, options?: DxfOptions): string {
   const o = resolveDxfOptions(options);
-  const plan = planSheet(template, {
+  const developed =
+    options?.surface === undefined ? template : onDevelopmentSurface(template, { surface: options.surface, ...(options.plateThicknessMm === undefined ? {} : { plateThicknessMm: options.plateThicknessMm }) });
+  const part = options?.closedParts === true ? closeTemplate(developed, options.stubMm === undefined ? {} : { stubMm: options.stubMm }) : developed;
+  const plan = planSheet(part, {
     sheetUnits: o.units,
     ...(o.job === '' ? {} : { job: o.job }),
     ...(o.piece === '' ? {} : { piece: o.piece }),
@@ -69,5 +78,5 @@ export function templateToDxf(template: Template, options?: DxfOptions): string 
     // The DXF leaves the paper layer out: not planning it saves the work, and moves nothing else.
     paper: false,
   });
-  return planToDxf(plan, { units: o.units, version: o.version, joinEpsMm: o.joinEpsMm });
+  return planToDxf(plan, { units: o.units, version: o.version, joinEpsMm: o.joinEpsMm, text: o.text });
 }

@@ -12,6 +12,13 @@ export type DxfVersion = 'AC1021' | 'R12';
 /** Unit of the coordinates written (and of `$INSUNITS`): millimetres or inches. */
 export type DxfUnits = 'mm' | 'in';
 
+/**
+ * How the DXF carries text: `text` (TEXT entities on the TEXT layer), `none`
+ * (left out, for a table that would choke on text), `stroke` (Girth's
+ * single-stroke font as lines on MARK, for a table that etches or scribes it).
+ */
+export type DxfTextMode = 'text' | 'none' | 'stroke';
+
 /** The three layers Girth writes, by role. */
 export type DxfLayerRole = 'cut' | 'mark' | 'text';
 
@@ -45,7 +52,20 @@ export interface DxfOptions {
   readonly stationNumbers?: boolean;
   /** Path ends closer than this (mm) are joined, (0, 1]; default {@link JOIN_EPS_MM}. */
   readonly joinEpsMm?: number;
+  /**
+   * Write the template as closed parts for a cutting table (see `closeTemplate` of
+   * `@girth/unroll`): a wrap becomes one closed contour with a square end; default false.
+   */
+  readonly closedParts?: boolean;
+  /** With `closedParts`: a single-cut wrap's stub length, mm, from the square line to the square end; default the deepest cutback + 50 mm. */
+  readonly stubMm?: number;
+  /** Develop on the OD (`'od'`, default) or on the mid-thickness of a rolled plate (`'mid'`, needs `plateThicknessMm`). */
+  readonly surface?: 'od' | 'mid';
+  /** Thickness of the plate rolled into the pipe, mm, for `surface: 'mid'`. */
+  readonly plateThicknessMm?: number;
+  /** Text as TEXT entities (`'text'`, default), left out (`'none`') or single-stroke lines on MARK (`'stroke'`). */
+  readonly text?: DxfTextMode;
 }
 
 /** Options of {@link planToDxf}: how to write, not what (the plan already holds the text). */
-export type DxfWriteOptions = Pick<DxfOptions, 'units' | 'version' | 'joinEpsMm'>;
+export type DxfWriteOptions = Pick<DxfOptions, 'units' | 'version' | 'joinEpsMm' | 'text'>;

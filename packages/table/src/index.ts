@@ -17,6 +17,7 @@ export type {
   ResultJsonOptions,
   StationJson,
   TemplateJson,
+  DevelopmentJson,
   PipeJson,
   WarningJson,
   ResultJson,

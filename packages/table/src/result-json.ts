@@ -2,12 +2,12 @@
  * A layout result as the JSON result contract of DESIGN.md.
  */
 import { GirthError, MM_PER_INCH, requireFinite } from '@girth/pipes';
-import type { LayoutResult, PipeUsed, Template } from '@girth/unroll';
+import { describeLine, developmentNote, type Development, type LayoutResult, type PipeUsed, type Template } from '@girth/unroll';
 import { jointFields, type FieldWriters } from './internal/joint-fields.js';
 import { fitUpFields, templateOrdinatesFields } from './internal/fit-up-json.js';
 import { hasStationValue } from './internal/station-cells.js';
 import { weldPrepFields } from './internal/weld-prep-fields.js';
-import type { PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson, WarningJson } from './types.js';
+import type { DevelopmentJson, PipeJson, ResultJson, ResultJsonOptions, StationJson, TemplateJson, WarningJson } from './types.js';
 
 /**
  * Contract numbers are rounded to this many decimals of their unit (1e-6 mm or
@@ -33,7 +33,18 @@ function requireList(value: unknown, field: string): readonly unknown[] {
   return value;
 }
 
-function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: string) => number, w: FieldWriters): TemplateJson {
+function developmentJson(d: Development, field: string, toUnit: (mm: unknown, field: string) => number, units: 'mm' | 'in'): DevelopmentJson {
+  const f = `${field}.development`;
+  return {
+    surface: d.surface,
+    diameter: toUnit(d.diameterMm, `${f}.diameterMm`),
+    od: toUnit(d.odMm, `${f}.odMm`),
+    ...(d.plateThicknessMm === undefined ? {} : { plateThickness: toUnit(d.plateThicknessMm, `${f}.plateThicknessMm`) }),
+    rule: describeLine(developmentNote(d), { units }),
+  };
+}
+
+function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: string) => number, w: FieldWriters, units: 'mm' | 'in'): TemplateJson {
   const field = `templates[${i}]`;
   const columns = requireList(t.stationColumns, `${field}.stationColumns`) as Template['stationColumns'];
   for (const c of columns) {
@@ -59,6 +70,10 @@ function templateJson(t: Template, i: number, toUnit: (mm: unknown, field: strin
     id: String(t.id),
     title: String(t.title ?? ''),
     ...(t.kind === 'wrap' ? { stretchOut: toUnit(t.stretchOutMm, `${field}.stretchOutMm`) } : {}),
+    ...(t.development === undefined ? {} : { development: developmentJson(t.development, field, toUnit, units) }),
+    ...(t.closedPart === undefined
+      ? {}
+      : { closedPart: t.closedPart.stubMm === undefined ? {} : { stub: toUnit(t.closedPart.stubMm, `${field}.closedPart.stubMm`) } }),
     stations,
     ...templateOrdinatesFields(t, w, field),
   };
@@ -150,7 +165,7 @@ export function toResultJson(result: LayoutResult, options: ResultJsonOptions): 
     angle: (deg, field) => denoise(requireFinite(deg, field)),
     count: (value, field) => requireFinite(value, field),
   };
-  const templates = (requireList(result.templates, 'templates') as LayoutResult['templates']).map((t, i) => templateJson(t, i, toUnit, writers));
+  const templates = (requireList(result.templates, 'templates') as LayoutResult['templates']).map((t, i) => templateJson(t, i, toUnit, writers, units));
   const pipes = (requireList(result.pipes ?? [], 'pipes') as LayoutResult['pipes']).map((p, i) => pipeJson(p, i, toUnit));
   const warnings: WarningJson[] = (requireList(result.warnings ?? [], 'warnings') as LayoutResult['warnings']).map((w) => ({
     code: String(w.code),

@@ -47,9 +47,27 @@ export interface TemplateJson {
   readonly title: string;
   /** For wraps: developed length of the girth, in the result's unit. */
   readonly stretchOut?: number;
+  /**
+   * Present when the template was developed on a chosen surface: `surface`
+   * `od` or `mid` (mid-thickness of a rolled plate), the `diameter` the girth
+   * is measured on (OD, or OD - plate thickness), the pipe's `od`, the
+   * `plateThickness` for `mid`, all in the result's unit, and `rule` in words.
+   */
+  readonly development?: DevelopmentJson;
+  /** Present when the template was made into one closed part to cut: `stub` (single-cut wraps), in the result's unit. */
+  readonly closedPart?: { readonly stub?: number };
   readonly stations: readonly StationJson[];
   /** With the fit-up applied, on a template with a cut measured from a square line: the reference and each cut column's depth (see docs/contract.md). */
   readonly ordinates?: unknown;
+}
+
+/** How a template's girth was developed (see {@link TemplateJson.development}). */
+export interface DevelopmentJson {
+  readonly surface: 'od' | 'mid';
+  readonly diameter: number;
+  readonly od: number;
+  readonly plateThickness?: number;
+  readonly rule: string;
 }
 
 /** A pipe as the joint used it, lengths in the result's unit. */

@@ -109,3 +109,9 @@ export type { LayoutNozzleOptions, NozzleLayout } from './nozzle/types.js';
 export { layoutNozzle } from './nozzle/layout-nozzle.js';
 export { developHeadHole } from './nozzle/head-hole.js';
 export type { HeadHoleInput } from './nozzle/head-hole.js';
+// Cutting-table parts: closed contours and the development surface.
+export type { ClosedPart, Development, DevelopmentSurfaceKind } from './types.js';
+export { closeTemplate, deepestCutbackMm, DEFAULT_STUB_MARGIN_MM } from './closed/close-template.js';
+export type { CloseTemplateOptions } from './closed/close-template.js';
+export { onDevelopmentSurface, developmentNote } from './plate/development-surface.js';
+export type { DevelopmentSurfaceOptions } from './plate/development-surface.js';

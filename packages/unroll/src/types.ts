@@ -105,6 +105,35 @@ export interface StationRow {
   readonly values: Readonly<Record<string, number>>;
 }
 
+/**
+ * How a template was made into one closed part for a cutting table (see
+ * `closeTemplate`): `stubMm` is the length of a single-cut wrap's stub, from
+ * the square line (through the long point) to the square end, mm; absent for
+ * a piece cut at both ends, a hole or a flat pattern, which close on their own.
+ */
+export interface ClosedPart {
+  readonly stubMm?: number;
+}
+
+/** Which surface of the pipe a template is developed on (see `onDevelopmentSurface`). */
+export type DevelopmentSurfaceKind = 'od' | 'mid';
+
+/**
+ * The surface a template's girth is measured on: `od` (wrapped on the outside
+ * of the pipe) or `mid`, the mid-thickness (neutral) surface of a plate of
+ * `plateThicknessMm` rolled into the pipe, diameter OD - t. The cut keeps its
+ * true place on the pipe; only the girth is measured on another diameter.
+ */
+export interface Development {
+  readonly surface: DevelopmentSurfaceKind;
+  /** Diameter the girth is measured on, mm: the OD, or OD - t. */
+  readonly diameterMm: number;
+  /** The OD of the pipe the template is for, mm. */
+  readonly odMm: number;
+  /** Plate thickness, mm; present for `mid`. */
+  readonly plateThicknessMm?: number;
+}
+
 /** What every template has, whatever its kind. */
 export interface TemplateBase {
   /** Contract id: `branch-cut`, `header-hole`, `miter-end`, `miter-middle`, `plane-cut`, `cone-pattern`, ... */
@@ -129,6 +158,10 @@ export interface TemplateBase {
   readonly ordinates?: TemplateOrdinates;
   /** The joint's fit-up dimensions in the job's unit, one sentence a line; set by `withFitUp`. */
   readonly fitUpLines?: readonly string[];
+  /** Set when the template was made into one closed part to cut (see {@link ClosedPart}). */
+  readonly closedPart?: ClosedPart;
+  /** Set when the template was developed on a chosen surface (see {@link Development}); absent means the OD. */
+  readonly development?: Development;
 }
 
 /** A template wrapped around a pipe's OD: x is the girth from station 1, y runs along the pipe. */

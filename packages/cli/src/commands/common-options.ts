@@ -1,10 +1,11 @@
 /**
  * Options every joint command takes: units, stations, outputs, labels.
  */
-import { DEFAULT_STATIONS, GirthError, rangeText, requireWithin, STATIONS, type LengthUnit } from '@girth/pipes';
-import type { DxfVersion } from '@girth/dxf';
+import { DEFAULT_STATIONS, GirthError, parseLength, rangeText, requireWithin, STATIONS, type LengthUnit } from '@girth/pipes';
+import type { DxfTextMode, DxfVersion } from '@girth/dxf';
+import type { CuttingSettings } from '../cutting-parts.js';
 import type { TableLengthFormat } from '@girth/table';
-import { choiceOption, numberOption, stringOption, type OptionSpec, type ParsedArgs } from '../args.js';
+import { choiceOption, numberOption, optionalChoice, stringOption, type OptionSpec, type ParsedArgs } from '../args.js';
 import { checkLabel } from '../labels.js';
 import type { JointContext } from '../joints/types.js';
 import type { OutputRequest, OutputStyle } from '../outputs.js';
@@ -19,6 +20,11 @@ export const COMMON_OPTIONS: OptionSpec = {
   dxf: { type: 'string' },
   'dxf-version': { type: 'string' },
   csv: { type: 'string' },
+  'closed-parts': { type: 'boolean' },
+  stub: { type: 'string' },
+  'develop-on': { type: 'string' },
+  'rolled-plate': { type: 'string' },
+  'dxf-text': { type: 'string' },
   json: { type: 'boolean' },
   job: { type: 'string' },
   piece: { type: 'string' },
@@ -37,6 +43,18 @@ Outputs (without any, the ordinate table is printed):
   --dxf FILE             flat pattern for a cutting table
   --dxf-version 2007|r12 DXF flavour (default 2007; r12 for older tables; with --dxf)
   --csv FILE             station table as CSV
+For a cutting table (SVG, DXF, CSV and JSON all show the same part):
+  --closed-parts         every part one closed contour: a wrap gets both seam
+                         edges and a square end; a miter middle piece closes
+  --stub LENGTH          with --closed-parts: branch or pipe end length from the
+                         square line (long point) to the square end
+                         (default: deepest cutback + 2 in / 50 mm)
+  --develop-on od|mid    girth on the OD (wrap laid on the pipe, default) or on the
+                         mid-thickness of plate cut flat and rolled (pi x (OD - t))
+  --rolled-plate LENGTH  with --develop-on mid: thickness of the plate rolled into
+                         the pipe (default each pipe's wall)
+  --dxf-text text|none|stroke  DXF text as text, left out, or single-stroke
+                         lines on MARK for a table that etches (with --dxf)
   --json                 print the result as JSON on standard output
   --job TEXT, --piece TEXT  labels printed on every sheet
   --force                overwrite existing files
@@ -45,6 +63,8 @@ Outputs (without any, the ordinate table is printed):
 
 /** Everything the shared options decide. */
 export interface CommonSettings {
+  /** Closed parts and development surface, applied to the result before any output. */
+  readonly cutting: CuttingSettings;
   readonly ctx: JointContext;
   readonly style: OutputStyle;
   readonly request: OutputRequest;
@@ -71,7 +91,14 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
     ...(stringOption(args, 'dxf') !== undefined ? { dxf: stringOption(args, 'dxf')! } : {}),
     ...(stringOption(args, 'csv') !== undefined ? { csv: stringOption(args, 'csv')! } : {}),
   };
+  const cutting = readCuttingOptions(args, units);
+  const dxfTextChoice = optionalChoice(args, 'dxf-text', ['text', 'none', 'stroke'] as const);
+  if (dxfTextChoice !== undefined && stringOption(args, 'dxf') === undefined) {
+    throw new GirthError('BAD_OPTION', '--dxf-text', '--dxf-text: no DXF is written; give --dxf FILE too, or leave --dxf-text out');
+  }
+  const dxfText: DxfTextMode = dxfTextChoice ?? 'text';
   return {
+    cutting,
     ctx: {
       units,
       stations,
@@ -79,7 +106,7 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
       fieldName: (name) => `--${kebab(name)}`,
       describe: { units, lengthFormat: tableFormat, fraction },
     },
-    style: { units, tableFormat, fraction, dxfVersion, ...(job !== undefined ? { job } : {}), ...(piece !== undefined ? { piece } : {}) },
+    style: { units, tableFormat, fraction, dxfVersion, dxfText, ...(job !== undefined ? { job } : {}), ...(piece !== undefined ? { piece } : {}) },
     request,
     json: args.values.json === true,
     force: args.values.force === true,
@@ -105,4 +132,33 @@ export function refuseIdleOptions(args: ParsedArgs, units: LengthUnit): void {
 /** `radiusNps` → `radius-nps`, as the option is typed. */
 export function kebab(name: string): string {
   return name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`);
+}
+
+/**
+ * Reads `--closed-parts`, `--stub`, `--develop-on` and `--rolled-plate`.
+ * @throws GirthError naming the option: `BAD_OPTION` for `--stub` without
+ *   `--closed-parts` or `--rolled-plate` without `--develop-on mid`; the length errors
+ *   of a stub or plate that is not a length above zero.
+ * @example readCuttingOptions(parseOptions(['--closed-parts'], COMMON_OPTIONS), 'in').closedParts // true
+ */
+export function readCuttingOptions(args: ParsedArgs, units: LengthUnit): CuttingSettings {
+  const closedParts = args.values['closed-parts'] === true;
+  const developOn = choiceOption(args, 'develop-on', ['od', 'mid'], 'od');
+  const stubText = stringOption(args, 'stub');
+  const plateText = stringOption(args, 'rolled-plate');
+  if (stubText !== undefined && !closedParts) {
+    throw new GirthError('BAD_OPTION', '--stub', '--stub: the stub length is for closed parts; give --closed-parts too, or leave --stub out');
+  }
+  if (plateText !== undefined && developOn !== 'mid') {
+    throw new GirthError('BAD_OPTION', '--rolled-plate', '--rolled-plate: the plate thickness is for --develop-on mid; give it too, or leave --rolled-plate out');
+  }
+  const stubMm = stubText === undefined ? undefined : parseLength(stubText, { unit: units, field: '--stub' });
+  const plateMm = plateText === undefined ? undefined : parseLength(plateText, { unit: units, field: '--rolled-plate' });
+  return {
+    closedParts,
+    developOn,
+    ...(stubMm === undefined ? {} : { stubMm }),
+    ...(plateMm === undefined ? {} : { plateMm }),
+    fields: { stub: '--stub', plate: '--rolled-plate' },
+  };
 }

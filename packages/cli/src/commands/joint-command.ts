@@ -9,6 +9,7 @@ import type { JointDefinition } from '../joints/definition.js';
 import { layoutJoint } from '../joints/layout-joint.js';
 import type { JointInput } from '../joints/registry.js';
 import { planOutputs } from '../outputs.js';
+import { prepareForCutting } from '../cutting-parts.js';
 import { toResultJson } from '@girth/table';
 import { layoutReportText, REPORT_CAUTION } from '../report.js';
 import { writeFilesAtomically } from '../write-files.js';
@@ -20,7 +21,7 @@ import { readCommonOptions } from './common-options.js';
  */
 export async function runJointCommand(joint: JointDefinition<JointInput>, args: ParsedArgs, io: CliIo): Promise<void> {
   const settings = readCommonOptions(args);
-  const result = layoutJoint(joint.fromOptions(args), settings.ctx);
+  const result = prepareForCutting(layoutJoint(joint.fromOptions(args), settings.ctx), settings.cutting, settings.ctx.units, settings.ctx.describe);
   const files = planOutputs(result, settings.request, settings.style);
   const written = await writeFilesAtomically(files, { force: settings.force, onNote: io.err });
   if (settings.json) {

@@ -4,12 +4,13 @@
  * streams; {@link planJob} holds a whole job in memory.
  */
 import { join } from 'node:path';
-import { GirthError } from '@girth/pipes';
+import { GirthError, parseLength } from '@girth/pipes';
 import type { LayoutResult } from '@girth/unroll';
 import type { TableLengthFormat } from '@girth/table';
 import { layoutJoint } from '../joints/layout-joint.js';
 import type { JointContext } from '../joints/types.js';
 import { planOutputs, type OutputStyle } from '../outputs.js';
+import { prepareForCutting, type CuttingSettings } from '../cutting-parts.js';
 import { layoutReportText, REPORT_CAUTION, type ReportStyle } from '../report.js';
 import type { PlannedFile } from '../write-files.js';
 import { alignSummary, summaryRow } from './summary-table.js';
@@ -47,6 +48,9 @@ export function refuseIdleJobKeys(job: Job): void {
   if (job.units === 'mm' && job.decimal !== undefined) idle('decimal', 'millimetres are always decimal; "decimal" is for inches ("units": "in")');
   if (job.units === 'mm' && job.fraction !== undefined) idle('fraction', 'millimetres are not rounded to fractions; "fraction" is for feet-inch output ("units": "in")');
   if (job.decimal === true && job.fraction !== undefined) idle('fraction', 'decimal inches are not rounded to fractions; give "decimal" or "fraction", not both');
+  if (job.stub !== undefined && job.closedParts !== true) idle('stub', 'the stub length is for closed parts; add "closedParts": true or leave stub out');
+  if (job.rolledPlate !== undefined && job.developOn !== 'mid') idle('rolledPlate', 'the plate thickness is for "developOn": "mid"; add it or leave rolledPlate out');
+  if (job.dxfText !== undefined && job.outputs !== undefined && !job.outputs.includes('dxf')) idle('dxfText', 'no DXF is written ("outputs" leaves out "dxf"); add "dxf" to outputs or leave dxfText out');
   if (job.dxfVersion !== undefined && job.outputs !== undefined && !job.outputs.includes('dxf')) idle('dxfVersion', 'no DXF is written ("outputs" leaves out "dxf"); add "dxf" to outputs or leave dxfVersion out');
 }
 
@@ -73,13 +77,23 @@ interface JobStyle {
   readonly fraction: 8 | 16 | 32;
   readonly report: ReportStyle;
   readonly outputs: ReadonlySet<string>;
+  readonly cutting: CuttingSettings;
 }
 
 function jobStyle(job: Job): JobStyle {
   refuseIdleJobKeys(job);
   const tableFormat: TableLengthFormat = job.units === 'mm' ? 'mm' : job.decimal === true ? 'in' : 'ft-in';
+  const stubMm = job.stub === undefined ? undefined : parseLength(String(job.stub), { unit: job.units, field: 'stub' });
+  const plateMm = job.rolledPlate === undefined ? undefined : parseLength(String(job.rolledPlate), { unit: job.units, field: 'rolledPlate' });
+  const cutting: CuttingSettings = {
+    closedParts: job.closedParts === true,
+    developOn: job.developOn ?? 'od',
+    ...(stubMm === undefined ? {} : { stubMm }),
+    ...(plateMm === undefined ? {} : { plateMm }),
+    fields: { stub: 'stub', plate: 'rolledPlate' },
+  };
   const fraction = job.fraction ?? 16;
-  return { tableFormat, fraction, report: { units: job.units, tableFormat, fraction }, outputs: new Set(job.outputs ?? ['svg', 'dxf', 'csv']) };
+  return { tableFormat, fraction, report: { units: job.units, tableFormat, fraction }, outputs: new Set(job.outputs ?? ['svg', 'dxf', 'csv']), cutting };
 }
 
 /**
@@ -92,7 +106,7 @@ function jobStyle(job: Job): JobStyle {
  * @example for (const p of planPieces(job, 'out')) await write(p.files)
  */
 export function* planPieces(job: Job, outDir: string, timing?: JobTiming): Generator<PiecePlan, void, undefined> {
-  const { tableFormat, fraction, report, outputs } = jobStyle(job);
+  const { tableFormat, fraction, report, outputs, cutting } = jobStyle(job);
   const stems = new Map<string, number>();
   const dxfVersion = job.dxfVersion === 'r12' ? 'R12' : 'AC1021';
   for (let i = 0; i < job.pieces.length; i++) {
@@ -111,9 +125,9 @@ export function* planPieces(job: Job, outDir: string, timing?: JobTiming): Gener
       describe: { units: job.units, lengthFormat: tableFormat, fraction },
     };
     const t0 = timing === undefined ? 0 : performance.now();
-    const result = layoutJoint(piece, ctx);
+    const result = prepareForCutting(layoutJoint(piece, ctx), cutting, job.units, ctx.describe);
     const t1 = timing === undefined ? 0 : performance.now();
-    const style: OutputStyle = { units: job.units, tableFormat, fraction, dxfVersion, job: job.job, piece: piece.piece };
+    const style: OutputStyle = { units: job.units, tableFormat, fraction, dxfVersion, ...(job.dxfText === undefined ? {} : { dxfText: job.dxfText }), job: job.job, piece: piece.piece };
     const base = join(outDir, stem);
     const files = planOutputs(
       result,

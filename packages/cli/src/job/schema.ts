@@ -59,6 +59,16 @@ const JOB_KEYS = {
   fraction: z.union([z.literal(8), z.literal(16), z.literal(32)]).optional(),
   dxfVersion: z.enum(['2007', 'r12']).optional(),
   outputs: z.array(z.enum(['svg', 'dxf', 'csv'])).min(1).optional(),
+  /** Every part one closed contour (see `--closed-parts`). */
+  closedParts: z.boolean().optional(),
+  /** Stub of a single-cut wrap with closedParts, a length (see `--stub`). */
+  stub: kit.length().optional(),
+  /** `od` or `mid` (see `--develop-on`). */
+  developOn: z.enum(['od', 'mid']).optional(),
+  /** Thickness of the plate rolled into the pipe for developOn mid, a length (see `--rolled-plate`). */
+  rolledPlate: kit.length().optional(),
+  /** DXF text: `text`, `none` or `stroke` (see `--dxf-text`). */
+  dxfText: z.enum(['text', 'none', 'stroke']).optional(),
   pieces: z.array(piece).min(1),
 };
 const job = z.strictObject(JOB_KEYS);
@@ -75,6 +85,11 @@ export interface Job {
   readonly fraction?: 8 | 16 | 32;
   readonly dxfVersion?: '2007' | 'r12';
   readonly outputs?: readonly ('svg' | 'dxf' | 'csv')[];
+  readonly closedParts?: boolean;
+  readonly stub?: string | number;
+  readonly developOn?: 'od' | 'mid';
+  readonly rolledPlate?: string | number;
+  readonly dxfText?: 'text' | 'none' | 'stroke';
   readonly pieces: readonly JobPiece[];
 }
 

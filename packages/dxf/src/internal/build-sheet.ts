@@ -12,8 +12,11 @@ import type { PathPart } from '@girth/unroll';
 import { dxfSafeText } from '../dxf-text.js';
 import { joinParts } from './join-parts.js';
 import { scaleEntity } from './scale.js';
+import { clipMarksOnCut } from './clip-marks.js';
+import { strokeText } from './stroke-text.js';
+import { orientContours } from './winding.js';
 import type { Sheet, SheetEntity } from './sheet.js';
-import type { DxfUnits } from '../types.js';
+import type { DxfTextMode, DxfUnits } from '../types.js';
 
 /** How the DXF writer treats a plan. */
 export interface PlanToSheetOptions {
@@ -21,21 +24,30 @@ export interface PlanToSheetOptions {
   readonly units: DxfUnits;
   /** Path ends closer than this (mm) are joined; station lines no longer than this are left out. */
   readonly joinEpsMm: number;
+  /** Text as TEXT entities on TEXT (`text`), left out (`none`), or single strokes on MARK (`stroke`); default `text`. */
+  readonly text?: DxfTextMode;
 }
 
-function textEntities(t: SheetText): SheetEntity[] {
+function textEntities(t: SheetText, mode: DxfTextMode): SheetEntity[] {
   const out: SheetEntity[] = [];
+  if (mode === 'none') return out;
   const turned = t.rotateDeg === 90;
+  // Turned 90° counter-clockwise about the pivot.
+  const turn = (p: readonly [number, number]): [number, number] => [t.pivot[0] - (p[1] - t.pivot[1]), t.pivot[1] + (p[0] - t.pivot[0])];
   t.lines.forEach((line, i) => {
     const safe = dxfSafeText(line);
     if (safe.length === 0) return;
-    // Line i sits i line-heights below the first before turning; turned 90° counter-clockwise about the pivot.
-    const x = t.at[0] - t.pivot[0];
-    const y = t.at[1] - i * t.lineMm - t.pivot[1];
+    // Line i sits i line-heights below the first before turning.
+    const at: [number, number] = [t.at[0], t.at[1] - i * t.lineMm];
+    if (mode === 'stroke') {
+      const strokes = strokeText(safe, at, t.capHeightMm, t.anchor === 'middle' ? 'center' : 'left', 'mark');
+      out.push(...(turned ? strokes.map((e) => (e.kind === 'polyline' ? { ...e, vertices: e.vertices.map((v) => [...turn([v[0], v[1]]), v[2]] as const) } : e)) : strokes));
+      return;
+    }
     out.push({
       kind: 'text',
       layer: 'text',
-      at: turned ? [t.pivot[0] - y, t.pivot[1] + x] : [t.at[0], t.at[1] - i * t.lineMm],
+      at: turned ? turn(at) : at,
       height: t.capHeightMm,
       text: safe,
       align: t.anchor === 'middle' ? 'center' : 'left',
@@ -72,16 +84,19 @@ export function planToSheet(plan: SheetPlan, o: PlanToSheetOptions): Sheet {
       else if (item.role === 'square-line') squareLines.push(...markEntity(item, o.joinEpsMm));
       else lines.push(...markEntity(item, o.joinEpsMm));
     } else if (item.kind === 'text') {
-      texts.push(...textEntities(item));
+      texts.push(...textEntities(item, o.text ?? 'text'));
     }
   }
-  const entities = [
-    ...joinParts(cutParts, 'cut', 'template.cut', o.joinEpsMm),
+  // CAM conventions: outer contours counter-clockwise, inner (scrap) clockwise; a hole template's contour is a hole.
+  const cut = orientContours(joinParts(cutParts, 'cut', 'template.cut', o.joinEpsMm), plan.template.kind === 'hole' ? 1 : 0);
+  const drawn = [
+    ...cut,
     ...squareLines,
     ...lines,
     ...joinParts(markParts, 'mark', 'template.marks', o.joinEpsMm),
-    ...texts,
   ];
+  // No mark along a cut edge: the table would scribe where it cuts. Text (stroked or not) sits off the lines.
+  const entities = [...clipMarksOnCut(drawn, o.joinEpsMm), ...texts];
   const k = o.units === 'in' ? 1 / MM_PER_INCH : 1;
   return { kind: 'sheet', units: o.units, entities: entities.map((e) => scaleEntity(e, k)) };
 }

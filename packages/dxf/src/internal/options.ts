@@ -4,7 +4,7 @@
 import { GirthError, requireInRange } from '@girth/pipes';
 import { CAP_HEIGHT_EM, FONT_MM } from '@girth/sheet';
 import { JOIN_EPS_MM } from '../tolerances.js';
-import type { DxfOptions, DxfUnits, DxfVersion } from '../types.js';
+import type { DxfOptions, DxfTextMode, DxfUnits, DxfVersion } from '../types.js';
 
 /** Cap height of the title line when `textHeightMm` is not given, mm: the sheet plan's, as on the SVG. */
 export const DEFAULT_TEXT_HEIGHT_MM = FONT_MM.title * CAP_HEIGHT_EM;
@@ -18,6 +18,7 @@ export interface ResolvedDxfOptions {
   readonly textHeightMm: number;
   readonly stationNumbers: boolean;
   readonly joinEpsMm: number;
+  readonly text: DxfTextMode;
 }
 
 function optionalString(value: unknown, field: string): string {
@@ -46,7 +47,15 @@ export function resolveDxfOptions(options: DxfOptions | undefined): ResolvedDxfO
   if (typeof stationNumbers !== 'boolean') {
     throw new GirthError('BAD_OPTION', 'options.stationNumbers', `options.stationNumbers: expected true or false`, stationNumbers);
   }
+  if (o.closedParts !== undefined && typeof o.closedParts !== 'boolean') {
+    throw new GirthError('BAD_OPTION', 'options.closedParts', 'options.closedParts: expected true or false', o.closedParts);
+  }
+  const text = o.text ?? 'text';
+  if (text !== 'text' && text !== 'none' && text !== 'stroke') {
+    throw new GirthError('BAD_CHOICE', 'options.text', `options.text: must be 'text', 'none' or 'stroke', got '${String(text)}'`, text);
+  }
   return {
+    text,
     units,
     version,
     job: optionalString(o.job, 'options.job'),

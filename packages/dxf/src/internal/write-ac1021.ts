@@ -1,7 +1,8 @@
 /**
  * Sheet -> DXF AC1021 (AutoCAD 2007 format) text through dxf-writer: closed
  * contours as LWPOLYLINE with bulges, ARC, CIRCLE, LINE, TEXT, layers with
- * explicit colours, `$INSUNITS`. dxf-writer supplies the handles, owner
+ * explicit colours, `$INSUNITS` and `$MEASUREMENT` for the unit, `$EXTMIN` /
+ * `$EXTMAX`. dxf-writer supplies the handles, owner
  * pointers, block records and objects a modern reader expects.
  */
 import Drawing from 'dxf-writer';
@@ -9,6 +10,8 @@ import { DXF_LAYER_ORDER, DXF_LAYERS } from '../layers.js';
 import { ANGLE_DECIMALS, BULGE_DECIMALS, COORD_DECIMALS } from '../tolerances.js';
 import { formatDxfNumber } from './format-number.js';
 import type { Sheet, SheetEntity } from './sheet.js';
+import { sheetExtents } from './extents.js';
+import { MEASUREMENT_CODE } from './units-header.js';
 
 /**
  * dxf-writer prints whatever it is given with `String()`, which turns small
@@ -48,6 +51,10 @@ function draw(d: Drawing, e: SheetEntity): void {
 export function writeAc1021(sheet: Sheet): string {
   const d = new Drawing();
   d.setUnits(sheet.units === 'in' ? 'Inches' : 'Millimeters');
+  d.header('MEASUREMENT', [[70, MEASUREMENT_CODE[sheet.units]]]);
+  const ext = sheetExtents(sheet.entities);
+  d.header('EXTMIN', [[10, c(ext.min[0])], [20, c(ext.min[1])], [30, 0]]);
+  d.header('EXTMAX', [[10, c(ext.max[0])], [20, c(ext.max[1])], [30, 0]]);
   for (const role of DXF_LAYER_ORDER) d.addLayer(DXF_LAYERS[role].name, DXF_LAYERS[role].colorAci, 'CONTINUOUS');
   for (const e of sheet.entities) draw(d, e);
   return d.toDxfString() + '\n';

@@ -1,6 +1,7 @@
 /**
- * Sheet -> DXF R12 (AC1009) text, written here group by group: HEADER with
- * $ACADVER and $INSUNITS, LTYPE / LAYER / STYLE tables, an empty BLOCKS
+ * Sheet -> DXF R12 (AC1009) text, written here group by group: a comment
+ * naming the unit in words (R12 defines no unit variable: $INSUNITS and
+ * $MEASUREMENT came later), HEADER with $ACADVER and $EXTMIN / $EXTMAX, LTYPE / LAYER / STYLE tables, an empty BLOCKS
  * section, and ENTITIES as POLYLINE / VERTEX / SEQEND (bulges in group 42),
  * ARC, CIRCLE, LINE and TEXT. No handles (R12 does not need them). Group codes
  * are right-aligned in three columns and lines end in CR LF, as R12-era
@@ -11,9 +12,9 @@ import { ANGLE_DECIMALS, BULGE_DECIMALS, COORD_DECIMALS } from '../tolerances.js
 import type { DxfLayerRole } from '../types.js';
 import { formatDxfNumber } from './format-number.js';
 import type { Sheet, SheetEntity } from './sheet.js';
+import { sheetExtents } from './extents.js';
+import { unitComment } from './units-header.js';
 
-/** `$INSUNITS` values (drawing units): 1 inches, 4 millimetres. */
-export const INSUNITS_CODE = { in: 1, mm: 4 } as const;
 
 /** Group codes right-aligned in three columns, made once. */
 const CODE_TEXT: readonly string[] = Array.from({ length: 1072 }, (_, code) => String(code).padStart(3, ' '));
@@ -100,12 +101,18 @@ function writeEntity(g: Groups, e: SheetEntity): void {
 /** The R12 DXF text of a sheet (ASCII, CR LF line ends, ends with `EOF`). */
 export function writeR12(sheet: Sheet): string {
   const g = groups();
+  // R12 defines neither $INSUNITS nor $MEASUREMENT (both came with later versions): the unit is said in words
+  // in this comment line and in the title block's text.
+  g.push(999, unitComment(sheet.units));
   g.push(0, 'SECTION');
   g.push(2, 'HEADER');
   g.push(9, '$ACADVER');
   g.push(1, 'AC1009');
-  g.push(9, '$INSUNITS');
-  g.push(70, String(INSUNITS_CODE[sheet.units]));
+  const ext = sheetExtents(sheet.entities);
+  g.push(9, '$EXTMIN');
+  point(g, ext.min[0], ext.min[1]);
+  g.push(9, '$EXTMAX');
+  point(g, ext.max[0], ext.max[1]);
   g.push(0, 'ENDSEC');
 
   g.push(0, 'SECTION');

@@ -6,6 +6,7 @@ import type { GeneratorBundle, HostSurface } from '@girth/geometry';
 import { GirthError } from '@girth/pipes';
 import type { Point2, StationLine, StationRow, TemplateLabel, WrapTemplate } from '../types.js';
 import { sampleCut } from './sample-cut.js';
+import { yOnPolyline } from '../internal/y-on-polyline.js';
 import type { TemplateFacts } from '../facts.js';
 
 const TWO_PI = 2 * Math.PI;
@@ -124,19 +125,4 @@ export function developWrap(input: DevelopWrapInput): WrapTemplate {
 function defaultLabels(stations: number): readonly WrapLabel[] {
   const heel: WrapLabel = { text: 'HEEL', phiRad: 0 };
   return stations % 2 === 0 ? [heel, { text: 'TOE', phiRad: Math.PI }] : [heel];
-}
-
-/** y of the polyline (ascending in x) at `x`, by linear interpolation. */
-function yOnPolyline(points: readonly Point2[], x: number): number {
-  let lo = 0;
-  let hi = points.length - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if ((points[mid] as Point2)[0] <= x) lo = mid;
-    else hi = mid;
-  }
-  const a = points[lo] as Point2;
-  const b = points[hi] as Point2;
-  const span = b[0] - a[0];
-  return span === 0 ? a[1] : a[1] + ((b[1] - a[1]) * (x - a[0])) / span;
 }

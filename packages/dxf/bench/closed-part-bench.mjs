@@ -1,0 +1,40 @@
+// Benchmark: median time to write a closed 45° lateral branch wrap (one closed
+// contour, mid-thickness development) as DXF, layout excluded. Target: under 2 ms.
+// Prints figures; asserts nothing. Needs the packages built (pnpm bench builds them).
+// Arc fitting and the shell plate with three holes are not built yet, so they are not timed here.
+import { performance } from 'node:perf_hooks';
+import { templateToDxf } from '@girth/dxf';
+import { layoutBranch } from '@girth/unroll';
+
+const RUNS = 300;
+const WARMUP = 50;
+const IN = 25.4;
+// ASME B36.10M (recalled): NPS 12 STD 12.750 x 0.375 in, NPS 6 STD 6.625 x 0.280 in.
+const lateral = layoutBranch({
+  header: { odMm: 12.75 * IN, wallMm: 0.375 * IN, label: 'NPS 12 STD' },
+  branch: { odMm: 6.625 * IN, wallMm: 0.28 * IN, label: 'NPS 6 STD' },
+  angleDeg: 45,
+});
+const cut = lateral.templates[0];
+const points = cut.cut[0].points.length;
+
+const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+console.log(`closed-part-bench: closed 45° lateral branch wrap (${points} cut points), median of ${RUNS} runs (target < 2 ms)`);
+for (const version of ['AC1021', 'R12']) {
+  for (const text of ['text', 'stroke']) {
+    const options = { version, closedParts: true, surface: 'mid', plateThicknessMm: 0.28 * IN, text, job: 'J-7730', piece: 'SP-21' };
+    let bytes = 0;
+    for (let i = 0; i < (text === 'text' ? WARMUP : 3); i++) bytes = templateToDxf(cut, options).length;
+    const times = [];
+    // Stroke text is every title-block character drawn as lines (thousands of entities): timed, no target.
+    const runs = text === 'text' ? RUNS : 20;
+    for (let i = 0; i < runs; i++) {
+      const t0 = performance.now();
+      templateToDxf(cut, options);
+      times.push(performance.now() - t0);
+    }
+    const m = median(times);
+    const verdict = text !== 'text' ? '  (no target)' : m < 2 ? '' : '  (over the 2 ms target)';
+    console.log(`  ${version.padEnd(6)} text ${text.padEnd(6)}: median ${m.toFixed(3)} ms, ${(bytes / 1024).toFixed(1)} KiB${verdict}`);
+  }
+}
