@@ -8,6 +8,8 @@ import { choiceOption, numberOption, stringOption, type OptionSpec, type ParsedA
 import { checkLabel } from '../labels.js';
 import type { JointContext } from '../joints/types.js';
 import type { OutputRequest, OutputStyle } from '../outputs.js';
+import type { PdfOptions } from '@girth/pdf';
+import { PRINT_OPTIONS, PRINT_OPTIONS_HELP, readPrintOptions } from '../print-options.js';
 
 /** The option definitions shared by all joint commands. */
 export const COMMON_OPTIONS: OptionSpec = {
@@ -19,6 +21,8 @@ export const COMMON_OPTIONS: OptionSpec = {
   dxf: { type: 'string' },
   'dxf-version': { type: 'string' },
   csv: { type: 'string' },
+  pdf: { type: 'string' },
+  ...PRINT_OPTIONS,
   json: { type: 'boolean' },
   job: { type: 'string' },
   piece: { type: 'string' },
@@ -37,6 +41,9 @@ Outputs (without any, the ordinate table is printed):
   --dxf FILE             flat pattern for a cutting table
   --dxf-version 2007|r12 DXF flavour (default 2007; r12 for older tables; with --dxf)
   --csv FILE             station table as CSV
+  --pdf FILE             every sheet at true size in one PDF, tiled on office paper
+                         with an assembly map, or one page per roll width
+${PRINT_OPTIONS_HELP}
   --json                 print the result as JSON on standard output
   --job TEXT, --piece TEXT  labels printed on every sheet
   --force                overwrite existing files
@@ -48,6 +55,8 @@ export interface CommonSettings {
   readonly ctx: JointContext;
   readonly style: OutputStyle;
   readonly request: OutputRequest;
+  /** How to print the PDF, when `--pdf` is given. */
+  readonly print?: PdfOptions;
   readonly json: boolean;
   readonly force: boolean;
 }
@@ -70,7 +79,9 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
     ...(stringOption(args, 'svg') !== undefined ? { svg: stringOption(args, 'svg')! } : {}),
     ...(stringOption(args, 'dxf') !== undefined ? { dxf: stringOption(args, 'dxf')! } : {}),
     ...(stringOption(args, 'csv') !== undefined ? { csv: stringOption(args, 'csv')! } : {}),
+    ...(stringOption(args, 'pdf') !== undefined ? { pdf: stringOption(args, 'pdf')! } : {}),
   };
+  const print = readPrintOptions(args, units, request.pdf !== undefined, '--pdf FILE');
   return {
     ctx: {
       units,
@@ -81,6 +92,7 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
     },
     style: { units, tableFormat, fraction, dxfVersion, ...(job !== undefined ? { job } : {}), ...(piece !== undefined ? { piece } : {}) },
     request,
+    ...(print !== undefined ? { print } : {}),
     json: args.values.json === true,
     force: args.values.force === true,
   };

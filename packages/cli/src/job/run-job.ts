@@ -10,15 +10,19 @@ import { layoutJoint } from '../joints/layout-joint.js';
 import type { JointContext } from '../joints/types.js';
 import { planOutputs, type OutputStyle } from '../outputs.js';
 import { layoutReportText, REPORT_CAUTION, type ReportStyle } from '../report.js';
-import type { PlannedFile } from '../write-files.js';
+import type { PlannedTextFile } from '../write-files.js';
 import { summaryTable } from './summary-table.js';
 import type { Job } from './schema.js';
 
 /** A job laid out: each piece's result and every file to write. */
 export interface JobPlan {
   readonly results: readonly { readonly piece: string; readonly result: LayoutResult }[];
-  readonly files: readonly PlannedFile[];
+  readonly files: readonly PlannedTextFile[];
   readonly summary: string;
+  /** The summary table alone (the job's cut list). */
+  readonly cutList: string;
+  /** Each piece's printed report with its ordinate tables, in the order of `results`. */
+  readonly reports: readonly string[];
 }
 
 /** A file-name stem from a piece label: `FG-12 SP-03 tee` → `fg-12-sp-03-tee`. */
@@ -61,7 +65,7 @@ export function planJob(job: Job, outDir: string): JobPlan {
   const outputs = new Set(job.outputs ?? ['svg', 'dxf', 'csv']);
   const stems = new Map<string, number>();
   const results: { piece: string; result: LayoutResult }[] = [];
-  const files: PlannedFile[] = [];
+  const files: PlannedTextFile[] = [];
   const texts: string[] = [];
   job.pieces.forEach((piece, i) => {
     const stem = pieceStem(piece.piece);
@@ -94,15 +98,16 @@ export function planJob(job: Job, outDir: string): JobPlan {
     );
     texts.push(layoutReportText(result, report, piece.piece));
   });
+  const cutList = summaryTable(results, report);
   const summary = [
     job.job,
     '',
-    summaryTable(results, report),
+    cutList,
     '',
     ...texts,
     REPORT_CAUTION,
     '',
   ].join('\n');
   files.push({ path: join(outDir, 'summary.txt'), content: summary });
-  return { results, files, summary };
+  return { results, files, summary, cutList, reports: texts };
 }
