@@ -166,7 +166,16 @@ export function planTiles(sheetWidthMm: number, sheetHeightMm: number, options: 
   const o = isResolved(options) ? options : resolvePdfOptions(options);
   const { paper } = o;
   const choices: ('portrait' | 'landscape')[] = o.orientation === 'auto' ? ['portrait', 'landscape'] : [o.orientation];
-  const layouts = choices.map((c) => layoutOn(paper, c, o, sheetWidthMm, sheetHeightMm));
+  // Auto: a turn the overlap or margin does not fit is left out; refused only when neither fits.
+  const tried = choices.map((c) => {
+    try {
+      return layoutOn(paper, c, o, sheetWidthMm, sheetHeightMm);
+    } catch (error) {
+      return error as GirthError;
+    }
+  });
+  const layouts = tried.filter((t): t is Layout => !(t instanceof GirthError));
+  if (layouts.length === 0) throw tried[0] as GirthError;
   const pages = (l: Layout) => l.rows * l.cols;
   const area = (l: Layout) => l.pageWidthMm * l.pageHeightMm;
   const best = layouts.reduce((a, b) => (pages(b) < pages(a) || (pages(b) === pages(a) && paper.kind === 'roll' && area(b) < area(a)) ? b : a));
