@@ -16,3 +16,14 @@ export function nps24Lateral(): readonly Template[] {
 export function nps24LateralWrapPlan(): SheetPlan {
   return planSheet(nps24Lateral()[0]!, { sheetUnits: 'in', job: 'J-7730 Larkfield condensate header', piece: 'SP-14 lateral' });
 }
+
+/**
+ * An NPS 12 STD lateral at 45° on an NPS 12 STD header: OD 12.75 in (ASME
+ * B36.10M), so its wrap's stretch-out is 12.75 x pi = 40.06 in, the 40 in
+ * wrap the reassembly check prints.
+ */
+export function nps12LateralWrapPlan(): SheetPlan {
+  const pipe = (label: string) => ({ odMm: 323.85, wallMm: 9.525, label });
+  const wrap = layoutBranch({ header: pipe('NPS 12 STD'), branch: pipe('NPS 12 STD'), angleDeg: 45 }).templates[0]!;
+  return planSheet(wrap, { sheetUnits: 'in', job: 'J-7730 Larkfield condensate header', piece: 'SP-09 lateral' });
+}

@@ -98,11 +98,13 @@ export function runCentre(at: (i: number) => number, from: number, to: number, s
     i += step;
   }
   if (step > 0 ? i > to : i < to) return undefined;
-  // Include the anti-aliased fringe on both sides of the run.
+  // Include the anti-aliased fringe on both sides of the run (paler than the
+  // 0.9 grey of an overlap strip is left out, so a strip is not taken for a fringe).
+  const fringe = 215;
   let a = i - step;
-  while (at(a) < 250 && (step > 0 ? a > from : a < from)) a -= step;
+  while (at(a) < fringe && (step > 0 ? a > from : a < from)) a -= step;
   let b = i;
-  while (at(b + step) < 250) b += step;
+  while (at(b + step) < fringe) b += step;
   const lo = Math.min(a, b);
   const hi = Math.max(a, b);
   let sum = 0;
