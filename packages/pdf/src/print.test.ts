@@ -14,7 +14,7 @@ import { calibrationSquareAt } from './furniture.js';
 import { planTiles, type TilePlan } from './tile-plan.js';
 import { planToPdf } from './write-pdf.js';
 import { nps12LateralWrapPlan, nps24LateralWrapPlan } from './test-support/lateral.js';
-import { pageText, qpdfCheck, renderPages, runCentre, type Grey } from './test-support/raster.js';
+import { pageText, pageTexts, qpdfCheck, renderPages, runCentre, type Grey } from './test-support/raster.js';
 import { darkAt, findTargets } from './test-support/targets.js';
 
 const median = (xs: readonly number[]): number => {
@@ -104,9 +104,11 @@ describe('an NPS 12 lateral wrap (40 in) tiled on Letter', () => {
   }, 120_000);
 
   it('pdftotext finds the map, each page label with its row and column, the caution and the labels on the pages that hold them', () => {
+    const texts = pageTexts(pdf);
+    expect(texts.length).toBe(tiles.pageCount);
     expect(pageText(pdf, 1)).toContain('Assembly map');
     tiles.tiles.forEach((t, i) => {
-      const text = pageText(pdf, i + 2);
+      const text = texts[i + 1]!;
       expect(text).toContain(`page ${t.label} (row ${t.label.replace(/\d+$/, '')}, column ${t.col + 1})`);
       expect(text).toContain(`Page ${i + 2} of ${tiles.pageCount}`);
     });
@@ -124,12 +126,12 @@ describe('an NPS 12 lateral wrap (40 in) tiled on Letter', () => {
     const caution = textItems(plan, 'caution')[0]!;
     const cautionPage = pageOf(caution);
     expect(cautionPage).toBeDefined();
-    expect(pageText(pdf, cautionPage!)).toContain('CAUTION');
+    expect(texts[cautionPage! - 1]).toContain('CAUTION');
     let checked = 0;
     for (const label of textItems(plan, 'label')) {
       const p = pageOf(label);
       if (p === undefined) continue;
-      expect(pageText(pdf, p), label.lines[0]).toContain(label.lines[0]!.split(' ')[0]!);
+      expect(texts[p - 1], label.lines[0]).toContain(label.lines[0]!.split(' ')[0]!);
       checked += 1;
     }
     expect(checked).toBeGreaterThan(0);

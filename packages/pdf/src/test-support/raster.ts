@@ -69,7 +69,20 @@ export function pageText(pdf: Uint8Array, page: number): string {
   try {
     const file = join(dir, 'in.pdf');
     writeFileSync(file, pdf);
-    return execFileSync('pdftotext', ['-layout', '-f', String(page), '-l', String(page), file, '-'], { encoding: 'latin1' });
+    return execFileSync('pdftotext', ['-layout', '-f', String(page), '-l', String(page), file, '-'], { encoding: 'utf8' });
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+/** Text of every page by one pdftotext run (pages end in a form feed), layout kept. */
+export function pageTexts(pdf: Uint8Array): string[] {
+  const dir = mkdtempSync(join(tmpdir(), 'girth-pdf-text-'));
+  try {
+    const file = join(dir, 'in.pdf');
+    writeFileSync(file, pdf);
+    const text = execFileSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8', maxBuffer: 256 * 1024 * 1024 });
+    return text.split('\f').slice(0, -1);
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
