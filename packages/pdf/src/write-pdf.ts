@@ -3,25 +3,13 @@
  * it takes more than one), and pages of plain text (a job's cover, ordinate
  * tables), every page with its band and calibration square.
  */
-import {
-  clip,
-  concatTransformationMatrix,
-  drawObject,
-  endPath,
-  PDFDocument,
-  PDFName,
-  popGraphicsState,
-  pushGraphicsState,
-  rectangle,
-  type PDFOperator,
-  type PDFPage,
-  type PDFRef,
-} from 'pdf-lib';
+import { PDFDocument, PDFName, type PDFPage, type PDFRef } from 'pdf-lib';
 import { CAUTION, GirthError } from '@girth/pipes';
 import type { SheetPlan } from '@girth/sheet';
-import { bandOps, neighbourOps, trimMarkOps } from './furniture.js';
+import { bandOps, calibrationSquareOps, neighbourOps, SQUARE_FORM_BOX, trimMarkOps } from './furniture.js';
 import { embedFonts, FONT_KEYS, type Fonts } from './internal/fonts.js';
-import { circleOps, fillRectOps, lineOps, rectOps, textLineOps, textWidth } from './internal/draw.js';
+import { circleOps, fillRectOps, lineOps, placeForm, rectOps, textLineOps, textWidth } from './internal/draw.js';
+import { cm, rect } from './internal/content.js';
 import { sheetOps } from './internal/sheet-ops.js';
 import { resolvePdfOptions, type PdfOptions, type ResolvedPdfOptions } from './options.js';
 import { BAND_MM, GUTTER_MM, planTiles, type Rect, type TilePlan } from './tile-plan.js';
@@ -52,8 +40,13 @@ interface Ctx {
   readonly doc: PDFDocument;
   readonly fonts: Fonts;
   readonly options: ResolvedPdfOptions;
-  readonly pages: { page: PDFPage; band: (pageNo: number, total: number) => PDFOperator[] }[];
+  readonly pages: { page: PDFPage; content: string; band: (pageNo: number, total: number) => string }[];
+  /** The calibration square, one form placed on every page. */
+  readonly square: PDFRef;
 }
+
+/** The calibration square's resource name on every page. */
+const SQUARE = 'GCal';
 
 function newPage(ctx: Ctx, widthMm: number, heightMm: number): PDFPage {
   const page = ctx.doc.addPage([widthMm * PT_PER_MM, heightMm * PT_PER_MM]);
@@ -64,14 +57,19 @@ function newPage(ctx: Ctx, widthMm: number, heightMm: number): PDFPage {
   ] as const) {
     page.node.setFontDictionary(PDFName.of(k), font.ref);
   }
-  page.pushOperators(pushGraphicsState(), concatTransformationMatrix(PT_PER_MM, 0, 0, PT_PER_MM, 0, 0));
+  page.node.setXObject(PDFName.of(SQUARE), ctx.square);
   return page;
 }
 
 function sheetForm(ctx: Ctx, plan: SheetPlan): PDFRef {
   const { left, top, widthMm, heightMm } = plan.page;
   const fontRefs = { [FONT_KEYS.regular]: ctx.fonts.regular.ref, [FONT_KEYS.bold]: ctx.fonts.bold.ref, [FONT_KEYS.mono]: ctx.fonts.mono.ref };
-  const form = ctx.doc.context.formXObject(sheetOps(plan, ctx.fonts), { BBox: [left, top - heightMm, left + widthMm, top], Resources: { Font: fontRefs } });
+  const form = ctx.doc.context.flateStream(sheetOps(plan, ctx.fonts), {
+    Type: 'XObject',
+    Subtype: 'Form',
+    BBox: [left, top - heightMm, left + widthMm, top],
+    Resources: { Font: fontRefs },
+  });
   return ctx.doc.context.register(form);
 }
 
@@ -79,19 +77,20 @@ function sheetName(plan: SheetPlan): string {
   return [plan.template.title, plan.piece, plan.job].filter((s) => s !== undefined && s !== '').join(' - ');
 }
 
-function clipTo(r: Rect): PDFOperator[] {
-  return [rectangle(r.x, r.y, r.width, r.height), clip(), endPath()];
+function clipTo(r: Rect): string {
+  return `${rect(r.x, r.y, r.width, r.height)}W n\n`;
 }
 
 const PRINT_LINE = 'Print at 100 % (actual size, no fit to page); measure the square both ways before use.';
 
-function mapPage(ctx: Ctx, plan: SheetPlan, tiles: TilePlan, form: PDFName): void {
+function mapPage(ctx: Ctx, plan: SheetPlan, tiles: TilePlan, form: string): void {
   const page = newPage(ctx, tiles.pageWidthMm, tiles.pageHeightMm);
   const c = tiles.content;
   const { fonts } = ctx;
-  const ops: PDFOperator[] = [];
-  const head = (text: string, y: number, size: number, bold = false) =>
-    ops.push(...textLineOps({ text, x: c.x, y, sizeMm: Math.min(size, fitSize(fonts, [text], c.width, size, bold)), font: bold ? fonts.bold : fonts.regular, fontKey: bold ? FONT_KEYS.bold : FONT_KEYS.regular }));
+  let ops = '';
+  const head = (text: string, y: number, size: number, bold = false) => {
+    ops += textLineOps({ text, x: c.x, y, sizeMm: Math.min(size, fitSize(fonts, [text], c.width, size, bold)), font: bold ? fonts.bold : fonts.regular, fontKey: bold ? FONT_KEYS.bold : FONT_KEYS.regular });
+  };
   const top = c.y + c.height;
   const title = `Assembly map: ${sheetName(plan)}`;
   head(title, top - 5, 4.2, true);
@@ -103,8 +102,10 @@ function mapPage(ctx: Ctx, plan: SheetPlan, tiles: TilePlan, form: PDFName): voi
     'Pages fit in the order of the grid below; the arrows at the edges of each page name its neighbours.',
   ];
   const textSize = fitSize(fonts, [...steps, CAUTION], c.width, 3);
-  steps.forEach((s, i) => ops.push(...textLineOps({ text: `${i + 1}. ${s}`, x: c.x, y: c.y + 10 + (steps.length - i) * textSize * 1.5, sizeMm: textSize, font: fonts.regular, fontKey: FONT_KEYS.regular })));
-  ops.push(...textLineOps({ text: CAUTION, x: c.x, y: c.y + 4, sizeMm: Math.min(textSize, fitSize(fonts, [CAUTION], c.width, 3, true)), font: fonts.bold, fontKey: FONT_KEYS.bold }));
+  steps.forEach((s, i) => {
+    ops += textLineOps({ text: `${i + 1}. ${s}`, x: c.x, y: c.y + 10 + (steps.length - i) * textSize * 1.5, sizeMm: textSize, font: fonts.regular, fontKey: FONT_KEYS.regular });
+  });
+  ops += textLineOps({ text: CAUTION, x: c.x, y: c.y + 4, sizeMm: Math.min(textSize, fitSize(fonts, [CAUTION], c.width, 3, true)), font: fonts.bold, fontKey: FONT_KEYS.bold });
   const box: Rect = { x: c.x, y: c.y + 14 + (steps.length + 1) * textSize * 1.5, width: c.width, height: top - 16 - (c.y + 14 + (steps.length + 1) * textSize * 1.5) };
   const last = tiles.tiles[tiles.tiles.length - 1]!;
   const coverW = last.window.x + last.window.width;
@@ -113,23 +114,17 @@ function mapPage(ctx: Ctx, plan: SheetPlan, tiles: TilePlan, form: PDFName): voi
   const mx = box.x + (box.width - s * coverW) / 2;
   const myTop = box.y + box.height;
   const { left, top: sheetTop } = plan.page;
-  ops.push(
-    ...rectOps(mx, myTop - s * plan.page.heightMm, s * plan.page.widthMm, s * plan.page.heightMm, 0.15, 0.6),
-    pushGraphicsState(),
-    concatTransformationMatrix(s, 0, 0, s, mx - s * left, myTop - s * sheetTop),
-    drawObject(form),
-    popGraphicsState(),
-  );
+  ops += rectOps(mx, myTop - s * plan.page.heightMm, s * plan.page.widthMm, s * plan.page.heightMm, 0.15, 0.6);
+  ops += `q\n${cm(s, 0, 0, s, mx - s * left, myTop - s * sheetTop)}/${form} Do\nQ\n`;
   for (const t of tiles.tiles) {
     const w = t.window;
     const rx = mx + s * w.x;
     const ry = myTop - s * (w.y + w.height);
-    ops.push(...rectOps(rx, ry, s * w.width, s * w.height, 0.35));
+    ops += rectOps(rx, ry, s * w.width, s * w.height, 0.35);
     const size = Math.max(1.6, Math.min(4.5, (s * w.height) / 4, (s * w.width) / 4));
-    ops.push(...textLineOps({ text: t.label, x: rx + size * 0.3, y: ry + s * w.height - size * 1.05, sizeMm: size, font: fonts.bold, fontKey: FONT_KEYS.bold }));
+    ops += textLineOps({ text: t.label, x: rx + size * 0.3, y: ry + s * w.height - size * 1.05, sizeMm: size, font: fonts.bold, fontKey: FONT_KEYS.bold });
   }
-  page.pushOperators(...ops);
-  ctx.pages.push({ page, band: (n, total) => bandOps(tiles.band, { label: 'MAP', lines: [`${plan.template.title}: assembly map`, bandLine2(plan), `Page ${n} of ${total}. ${PRINT_LINE}`] }, fonts, ctx.options.units) });
+  ctx.pages.push({ page, content: ops, band: (n, total) => bandOps(tiles.band, { label: 'MAP', lines: [`${plan.template.title}: assembly map`, bandLine2(plan), `Page ${n} of ${total}. ${PRINT_LINE}`] }, fonts, SQUARE) });
 }
 
 function bandLine2(plan: SheetPlan): string {
@@ -148,7 +143,7 @@ function fitSize(fonts: Fonts, lines: readonly string[], width: number, maxMm: n
   return Math.max(1.4, Math.min(maxMm, width / Math.max(widest, 1e-9)));
 }
 
-function tilePages(ctx: Ctx, plan: SheetPlan, tiles: TilePlan, form: PDFName): void {
+function tilePages(ctx: Ctx, plan: SheetPlan, tiles: TilePlan, form: string): void {
   const c = tiles.content;
   const { left, top } = plan.page;
   for (const t of tiles.tiles) {
@@ -156,25 +151,28 @@ function tilePages(ctx: Ctx, plan: SheetPlan, tiles: TilePlan, form: PDFName): v
     const w = t.window;
     const ux = (u: number) => c.x + (u - w.x);
     const vy = (v: number) => c.y + c.height - (v - w.y);
-    const ops: PDFOperator[] = [pushGraphicsState(), ...clipTo(c)];
-    for (const s of tiles.strips) ops.push(...fillRectOps(ux(s.x), vy(s.y + s.height), s.width, s.height, STRIP_GREY));
-    ops.push(pushGraphicsState(), concatTransformationMatrix(1, 0, 0, 1, c.x - left - w.x, c.y + c.height - top + w.y), drawObject(form), popGraphicsState());
+    let ops = `q\n${clipTo(c)}`;
+    for (const s of tiles.strips) {
+      if (s.x > w.x + w.width || s.x + s.width < w.x || s.y > w.y + w.height || s.y + s.height < w.y) continue;
+      ops += fillRectOps(ux(s.x), vy(s.y + s.height), s.width, s.height, STRIP_GREY);
+    }
+    ops += placeForm(form, c.x - left - w.x, c.y + c.height - top + w.y);
     const r = tiles.targetRadiusMm;
     if (r > 0) {
       for (const [u, v] of tiles.targets) {
         const [x, y] = [ux(u), vy(v)];
         if (x < c.x - r || x > c.x + c.width + r || y < c.y - r || y > c.y + c.height + r) continue;
         const arm = tiles.options.overlapMm / 2;
-        ops.push(...circleOps(x, y, r, 0.25), ...lineOps([[x - arm, y], [x + arm, y]], 0.15), ...lineOps([[x, y - arm], [x, y + arm]], 0.15));
+        ops += circleOps(x, y, r, 0.25) + lineOps([[x - arm, y], [x + arm, y]], 0.15) + lineOps([[x, y - arm], [x, y + arm]], 0.15);
       }
     }
-    ops.push(popGraphicsState(), ...trimMarkOps(c), ...neighbourOps(c, t, ctx.fonts));
-    page.pushOperators(...ops);
+    ops += `Q\n${trimMarkOps(c)}${neighbourOps(c, t, ctx.fonts)}`;
     const where = `row ${t.label.replace(/\d+$/, '')}, column ${t.col + 1}`;
     ctx.pages.push({
       page,
+      content: ops,
       band: (n, total) =>
-        bandOps(tiles.band, { label: t.label, lines: [`${plan.template.title}: page ${t.label} (${where}) of ${tiles.rows} x ${tiles.cols}`, bandLine2(plan), `Page ${n} of ${total}. ${PRINT_LINE}`] }, ctx.fonts, ctx.options.units),
+        bandOps(tiles.band, { label: t.label, lines: [`${plan.template.title}: page ${t.label} (${where}) of ${tiles.rows} x ${tiles.cols}`, bandLine2(plan), `Page ${n} of ${total}. ${PRINT_LINE}`] }, ctx.fonts, SQUARE),
     });
   }
 }
@@ -182,11 +180,11 @@ function tilePages(ctx: Ctx, plan: SheetPlan, tiles: TilePlan, form: PDFName): v
 function sheetPages(ctx: Ctx, plan: SheetPlan): void {
   const tiles = planTiles(plan.page.widthMm, plan.page.heightMm, ctx.options);
   const ref = sheetForm(ctx, plan);
-  const name = PDFName.of(`S${ref.objectNumber}`);
+  const name = `GS${ref.objectNumber}`;
   const before = ctx.pages.length;
   if (tiles.map) mapPage(ctx, plan, tiles, name);
   tilePages(ctx, plan, tiles, name);
-  for (const p of ctx.pages.slice(before)) p.page.node.setXObject(name, ref);
+  for (const p of ctx.pages.slice(before)) p.page.node.setXObject(PDFName.of(name), ref);
 }
 
 /**
@@ -220,13 +218,12 @@ function textPages(ctx: Ctx, title: string, lines: readonly string[]): void {
     const page = newPage(ctx, widthMm, heightMm);
     const top = content.y + content.height;
     const heading = chunks.length > 1 ? `${title} (${k + 1} of ${chunks.length})` : title;
-    const ops: PDFOperator[] = textLineOps({ text: heading, x: content.x, y: top - 5, sizeMm: Math.min(4.2, fitSize(ctx.fonts, [heading], content.width, 4.2, true)), font: ctx.fonts.bold, fontKey: FONT_KEYS.bold });
+    let ops = textLineOps({ text: heading, x: content.x, y: top - 5, sizeMm: Math.min(4.2, fitSize(ctx.fonts, [heading], content.width, 4.2, true)), font: ctx.fonts.bold, fontKey: FONT_KEYS.bold });
     chunk.forEach((line, i) => {
       if (line.trim() === '') return;
-      ops.push(...textLineOps({ text: line, x: content.x, y: top - 10 - size - i * step, sizeMm: size, font: ctx.fonts.mono, fontKey: FONT_KEYS.mono }));
+      ops += textLineOps({ text: line, x: content.x, y: top - 10 - size - i * step, sizeMm: size, font: ctx.fonts.mono, fontKey: FONT_KEYS.mono });
     });
-    page.pushOperators(...ops);
-    ctx.pages.push({ page, band: (n, total) => bandOps(band, { label: String(n), lines: [heading, `Page ${n} of ${total}`, PRINT_LINE] }, ctx.fonts, ctx.options.units) });
+    ctx.pages.push({ page, content: ops, band: (n, total) => bandOps(band, { label: String(n), lines: [heading, `Page ${n} of ${total}`, PRINT_LINE] }, ctx.fonts, SQUARE) });
   });
 }
 
@@ -263,13 +260,22 @@ export async function writePdf(parts: readonly PdfPart[], options: PdfOptions = 
   doc.setProducer('Girth (pdf-lib)');
   if (info.title !== undefined) doc.setTitle(info.title);
   if (info.subject !== undefined) doc.setSubject(info.subject);
-  const ctx: Ctx = { doc, fonts: await embedFonts(doc), options: resolved, pages: [] };
+  const fonts = await embedFonts(doc);
+  const fontRefs = { [FONT_KEYS.regular]: fonts.regular.ref, [FONT_KEYS.bold]: fonts.bold.ref, [FONT_KEYS.mono]: fonts.mono.ref };
+  const square = doc.context.register(
+    doc.context.flateStream(calibrationSquareOps(fonts, resolved.units), { Type: 'XObject', Subtype: 'Form', BBox: [...SQUARE_FORM_BOX], Resources: { Font: fontRefs } }),
+  );
+  const ctx: Ctx = { doc, fonts, options: resolved, pages: [], square };
   for (const part of parts) {
     if (part.kind === 'sheet') sheetPages(ctx, part.plan);
     else textPages(ctx, part.title, part.lines);
   }
   const total = ctx.pages.length;
-  ctx.pages.forEach((p, i) => p.page.pushOperators(...p.band(i + 1, total), popGraphicsState()));
+  ctx.pages.forEach((p, i) => {
+    // Points to millimetres, then the page's drawing and its band.
+    const stream = doc.context.flateStream(`q\n${cm(PT_PER_MM, 0, 0, PT_PER_MM, 0, 0)}${p.content}${p.band(i + 1, total)}Q\n`);
+    p.page.node.addContentStream(doc.context.register(stream));
+  });
   return doc.save({ useObjectStreams: true });
 }
 

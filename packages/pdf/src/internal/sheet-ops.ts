@@ -4,31 +4,10 @@
  * plan's drawing order. Written once per sheet as a form XObject that every
  * page of the sheet (and the assembly map) draws through its own window.
  */
-import {
-  beginText,
-  endText,
-  fill,
-  LineCapStyle,
-  popGraphicsState,
-  pushGraphicsState,
-  rectangle,
-  setDashPattern,
-  setFillingGrayscaleColor,
-  setFontAndSize,
-  setLineCap,
-  setLineJoin,
-  LineJoinStyle,
-  setLineWidth,
-  setStrokingGrayscaleColor,
-  setTextMatrix,
-  setTextRenderingMode,
-  showText,
-  stroke,
-  TextRenderingMode,
-  type PDFFont,
-  type PDFOperator,
-} from 'pdf-lib';
+import type { PDFFont } from 'pdf-lib';
 import { DASH_MM, INK, STROKE_MM, type SheetItem, type SheetPath, type SheetPathRole, type SheetPlan, type SheetText } from '@girth/sheet';
+import { num, rect, strokeStyle } from './content.js';
+import { showAt } from './draw.js';
 import { FONT_KEYS, type Fonts } from './fonts.js';
 import { printable } from './glyphs.js';
 import { partOps } from './path-ops.js';
@@ -58,24 +37,8 @@ const PATH_STYLE: Readonly<Record<SheetPathRole, Stroke>> = {
 /** Weight of the halo behind the words on the glue tab, mm (as the SVG). */
 const HALO_MM = 0.6;
 
-function strokeOps(style: Stroke, body: readonly PDFOperator[]): PDFOperator[] {
-  return [
-    pushGraphicsState(),
-    setStrokingGrayscaleColor(style.grey),
-    setLineWidth(style.widthMm),
-    setLineCap(style.butt === true ? LineCapStyle.Butt : LineCapStyle.Round),
-    setLineJoin(LineJoinStyle.Round),
-    ...(style.dashMm ? [setDashPattern([...style.dashMm], 0)] : []),
-    ...body,
-    stroke(),
-    popGraphicsState(),
-  ];
-}
-
-function pathItem(item: SheetPath): PDFOperator[] {
-  const body: PDFOperator[] = [];
-  partOps(item.part, body);
-  return strokeOps(PATH_STYLE[item.role], body);
+function stroked(style: Stroke, body: string): string {
+  return `q\n${strokeStyle(style.grey, style.widthMm, style.butt === true ? 0 : 1, style.dashMm)}${body}S\nQ\n`;
 }
 
 function boldText(t: SheetText): boolean {
@@ -84,10 +47,10 @@ function boldText(t: SheetText): boolean {
 
 /**
  * Text operators for one block of text at `at` (first baseline), mm y-up,
- * anchored and turned as the plan says. The font resource is `fontKey`.
+ * anchored and turned as the plan says (inside BT ... ET). The font resource is `fontKey`.
  */
-export function textOps(t: SheetText, font: PDFFont, fontKey: string): PDFOperator[] {
-  const ops: PDFOperator[] = [setFontAndSize(fontKey, t.fontMm)];
+export function textOps(t: SheetText, font: PDFFont, fontKey: string): string {
+  let s = `/${fontKey} ${num(t.fontMm)} Tf\n`;
   const turned = t.rotateDeg === 90;
   t.lines.forEach((raw, i) => {
     const line = printable(font, raw);
@@ -97,44 +60,42 @@ export function textOps(t: SheetText, font: PDFFont, fontKey: string): PDFOperat
     const y = t.at[1] - i * t.lineMm;
     if (turned) {
       const [px, py] = t.pivot;
-      ops.push(setTextMatrix(0, 1, -1, 0, px - (y - py), py + (x - px)));
+      s += showAt(font, line, 0, 1, -1, 0, px - (y - py), py + (x - px));
     } else {
-      ops.push(setTextMatrix(1, 0, 0, 1, x, y));
+      s += showAt(font, line, 1, 0, 0, 1, x, y);
     }
-    ops.push(showText(font.encodeText(line)));
   });
-  return ops;
+  return s;
 }
 
-function textItem(t: SheetText, fonts: Fonts): PDFOperator[] {
+function textItem(t: SheetText, fonts: Fonts): string {
   const bold = boldText(t);
-  const font = bold ? fonts.bold : fonts.regular;
-  const key = bold ? FONT_KEYS.bold : FONT_KEYS.regular;
-  const body = textOps(t, font, key);
-  const halo =
-    t.role === 'overlap'
-      ? [setStrokingGrayscaleColor(1), setLineWidth(HALO_MM), setLineJoin(LineJoinStyle.Round), setTextRenderingMode(TextRenderingMode.Outline), beginText(), ...body, endText()]
-      : [];
-  return [pushGraphicsState(), ...halo, setFillingGrayscaleColor(0), setTextRenderingMode(TextRenderingMode.Fill), beginText(), ...body, endText(), popGraphicsState()];
+  const body = textOps(t, bold ? fonts.bold : fonts.regular, bold ? FONT_KEYS.bold : FONT_KEYS.regular);
+  const halo = t.role === 'overlap' ? `1 G ${num(HALO_MM)} w 1 j 1 Tr\nBT\n${body}ET\n` : '';
+  return `q\n${halo}0 g 0 Tr\nBT\n${body}ET\nQ\n`;
 }
 
-function rectItem(item: Extract<SheetItem, { kind: 'rect' }>): PDFOperator[] {
+function rectItem(item: Extract<SheetItem, { kind: 'rect' }>): string {
   const b = item.box;
-  const r = rectangle(b.minX, b.minY, b.maxX - b.minX, b.maxY - b.minY);
-  if (item.filled) return [pushGraphicsState(), setFillingGrayscaleColor(0), r, fill(), popGraphicsState()];
-  return strokeOps({ grey: grey(INK.mid), widthMm: STROKE_MM.overlapOutline, butt: true }, [r]);
+  const r = rect(b.minX, b.minY, b.maxX - b.minX, b.maxY - b.minY);
+  if (item.filled) return `q\n0 g\n${r}f\nQ\n`;
+  return stroked({ grey: grey(INK.mid), widthMm: STROKE_MM.overlapOutline, butt: true }, r);
+}
+
+function pathItem(item: SheetPath): string {
+  return stroked(PATH_STYLE[item.role], partOps(item.part));
 }
 
 /**
- * Every item of the plan as PDF operators, in the plan's coordinates (mm, y-up).
- * @example const ops = sheetOps(planSheet(template), fonts);
+ * Every item of the plan as PDF content, in the plan's coordinates (mm, y-up).
+ * @example const content = sheetOps(planSheet(template), fonts);
  */
-export function sheetOps(plan: SheetPlan, fonts: Fonts): PDFOperator[] {
-  const out: PDFOperator[] = [];
+export function sheetOps(plan: SheetPlan, fonts: Fonts): string {
+  const out: string[] = [];
   for (const item of plan.items) {
-    if (item.kind === 'path') out.push(...pathItem(item));
-    else if (item.kind === 'text') out.push(...textItem(item, fonts));
-    else out.push(...rectItem(item));
+    if (item.kind === 'path') out.push(pathItem(item));
+    else if (item.kind === 'text') out.push(textItem(item, fonts));
+    else out.push(rectItem(item));
   }
-  return out;
+  return out.join('');
 }
