@@ -18,7 +18,7 @@ export interface OutputRequest {
   readonly svg?: string;
   readonly dxf?: string;
   readonly csv?: string;
-  /** One PDF of every template's sheet (written by {@link planPdfOutput}). */
+  /** One PDF of every template's sheet (written by `planPdfOutput`). */
   readonly pdf?: string;
 }
 
