@@ -86,7 +86,8 @@ export async function jobPacket(
   const parts: PdfPart[] = [{ kind: 'text', title: `Job packet: ${job}`, lines: cover }];
   for (const p of pieces) {
     parts.push(...layoutSheets(p.result, { units, job, piece: p.piece }));
-    parts.push({ kind: 'text', title: `${p.piece}: ordinate tables`, lines: [...p.report.trimEnd().split('\n'), '', ...wrapWords(caution, width)] });
+    const lines = p.report.trimEnd().split('\n');
+    parts.push({ kind: 'text', title: `${p.piece}: ordinate tables`, lines: [...lines, '', ...wrapWords(caution, Math.max(60, ...lines.map((l) => l.length)))] });
   }
   return printParts(parts, print, { title: `Job packet: ${job}` });
 }
