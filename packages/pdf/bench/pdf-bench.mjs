@@ -25,12 +25,17 @@ function median(xs) {
 async function time(runs, warm, fn) {
   for (let i = 0; i < warm; i++) await fn();
   const ms = [];
+  const cpu = [];
   for (let i = 0; i < runs; i++) {
     const t = performance.now();
+    const c = process.cpuUsage();
     await fn();
+    const used = process.cpuUsage(c);
+    cpu.push((used.user + used.system) / 1000);
     ms.push(performance.now() - t);
   }
-  return { median: median(ms), min: Math.min(...ms) };
+  // CPU time as well: on a shared, loaded machine the wall time mostly measures waiting.
+  return { median: median(ms), min: Math.min(...ms), cpu: median(cpu) };
 }
 
 const wrap = layoutBranch({ header: NPS[24], branch: NPS[24], angleDeg: 45 }).templates[0];
@@ -41,7 +46,7 @@ const one = await time(15, 3, async () => {
   bytes = (await planToPdf(wrapPlan, { paper: 'letter' })).length;
 });
 console.log(
-  `NPS 24 lateral wrap on Letter (${Math.round(wrapPlan.page.widthMm)} x ${Math.round(wrapPlan.page.heightMm)} mm, ${tiles.pageCount} pages, ${Math.round(bytes / 1024)} KiB): median ${one.median.toFixed(1)} ms, min ${one.min.toFixed(1)} ms (target < 50 ms)`,
+  `NPS 24 lateral wrap on Letter (${Math.round(wrapPlan.page.widthMm)} x ${Math.round(wrapPlan.page.heightMm)} mm, ${tiles.pageCount} pages, ${Math.round(bytes / 1024)} KiB): median ${one.median.toFixed(1)} ms, min ${one.min.toFixed(1)} ms, CPU ${one.cpu.toFixed(1)} ms (target < 50 ms)`,
 );
 
 // Twenty pieces: tees, laterals, cut-backs and miters on NPS 4 to 12, each with its table page.
@@ -71,5 +76,5 @@ const packet = await time(5, 1, async () => {
 });
 for (const p of parts) if (p.kind === 'sheet') packetPages += planTiles(p.plan.page.widthMm, p.plan.page.heightMm, { paper: 'letter' }).pageCount;
 console.log(
-  `20-piece job packet on Letter (${parts.filter((p) => p.kind === 'sheet').length} sheets, ${packetPages} sheet pages, ${Math.round(packetBytes / 1024)} KiB): median ${packet.median.toFixed(0)} ms, min ${packet.min.toFixed(0)} ms (target < 1 s)`,
+  `20-piece job packet on Letter (${parts.filter((p) => p.kind === 'sheet').length} sheets, ${packetPages} sheet pages, ${Math.round(packetBytes / 1024)} KiB): median ${packet.median.toFixed(0)} ms, min ${packet.min.toFixed(0)} ms, CPU ${packet.cpu.toFixed(0)} ms (target < 1 s)`,
 );
