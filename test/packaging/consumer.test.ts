@@ -153,7 +153,7 @@ describe('the packed packages in a fresh npm project', () => {
     await sh('npx', ['tsc', '-p', 'tsconfig.bundler.json']);
   }, TIMEOUT_MS);
 
-  it('the example runs: a 45° NPS 8 on NPS 12 lateral written as SVG and DXF', async () => {
+  it('the example runs: a 45° NPS 8 on NPS 12 lateral written as SVG, DXF and PDF', async () => {
     if (!existsSync(join(app, 'dist', 'example.js'))) await sh('npx', ['tsc', '-p', 'tsconfig.nodenext.json']);
     const { stdout } = await sh('node', ['dist/example.js']);
     const out = JSON.parse(stdout.trim().split('\n').at(-1)!) as { stretchOut: number; code: string };
