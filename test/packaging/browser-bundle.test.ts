@@ -24,7 +24,7 @@ describe('browser bundle of the library packages', () => {
     expect(bundle.nodeBuiltins.join('\n')).toContain('node:path');
   });
 
-  it('needs no Node built-in, and runs: a 45° NPS 8 on NPS 12 lateral to SVG, DXF and the contract', async () => {
+  it('needs no Node built-in, and runs: a 45° NPS 8 on NPS 12 lateral to SVG, DXF, PDF and the contract', async () => {
     const bundle = await bundleForBrowser(join(here, 'browser-entry.ts'), testRoot, ['source']);
     expect(bundle.nodeBuiltins).toEqual([]);
     const file = join(scratch, 'girth-browser.mjs');
@@ -41,6 +41,8 @@ describe('browser bundle of the library packages', () => {
     const json = girth.table.toResultJson(lateral, { units: 'in' });
     expect(svg.startsWith('<?xml')).toBe(true);
     expect(dxf).toContain('EOF');
+    const pdf = await girth.pdf.planToPdf(girth.sheet.planSheet(branchCut!, { sheetUnits: 'in' }), { paper: 'a4' });
+    expect(new TextDecoder().decode(pdf.subarray(0, 5))).toBe('%PDF-');
     // The NPS 8 branch's stretch-out is its OD times pi: 8.625 in (ASME B36.10M) x pi = 27.096 in.
     expect(json.templates[0]!.stretchOut).toBeCloseTo(8.625 * Math.PI, 3);
   });

@@ -9,3 +9,5 @@ export * as unroll from '@girth/unroll';
 export * as svg from '@girth/svg';
 export * as dxf from '@girth/dxf';
 export * as table from '@girth/table';
+export * as sheet from '@girth/sheet';
+export * as pdf from '@girth/pdf';

@@ -5,7 +5,7 @@
  * registry, so this test needs it), then:
  * - a strict `tsc` WITHOUT skipLibCheck under NodeNext and under Bundler
  *   resolution, over a short example and README's library examples;
- * - the example run with node: lays out a lateral, writes SVG and DXF;
+ * - the example run with node: lays out a lateral, writes SVG, DXF and PDF;
  * - `npx girth --help` and one `girth branch` run from the packed command.
  * The scratch project is removed afterwards unless GIRTH_KEEP_CONSUMER=1.
  */
@@ -32,6 +32,8 @@ import { GirthError, resolvePipe, type Pipe } from '@girth/pipes';
 import { layoutBranch, type Template } from '@girth/unroll';
 import { templateToSvg } from '@girth/svg';
 import { templateToDxf } from '@girth/dxf';
+import { planSheet } from '@girth/sheet';
+import { planToPdf } from '@girth/pdf';
 import { toResultJson, type ResultJson } from '@girth/table';
 
 const header: Pipe = resolvePipe('NPS 12 STD');
@@ -40,6 +42,7 @@ const [branchCut, headerHole]: readonly Template[] = lateral.templates;
 if (branchCut === undefined || headerHole === undefined) throw new Error('a branch lays out two templates');
 writeFileSync('lateral.svg', templateToSvg(branchCut, { sheetUnits: 'in', job: 'Job 4471', piece: 'SP-04' }));
 writeFileSync('lateral-hole.dxf', templateToDxf(headerHole, { units: 'in' }));
+writeFileSync('lateral.pdf', await planToPdf(planSheet(branchCut, { sheetUnits: 'in' }), { paper: 'letter' }));
 const json: ResultJson = toResultJson(lateral, { units: 'in' });
 let code = 'none';
 try {
@@ -117,7 +120,7 @@ afterAll(() => {
 describe('the packed packages in a fresh npm project', () => {
   it('each tarball holds dist/index.js and its .d.ts, and no workspace: version', () => {
     expect(packed.map((p) => p.name)).toEqual(
-      expect.arrayContaining(['@girth/pipes', '@girth/geometry', '@girth/unroll', '@girth/svg', '@girth/dxf', '@girth/table', 'girth']),
+      expect.arrayContaining(['@girth/pipes', '@girth/geometry', '@girth/unroll', '@girth/svg', '@girth/dxf', '@girth/table', '@girth/sheet', '@girth/pdf', 'girth']),
     );
     for (const p of packed) {
       expect(p.files, p.name).toContain('dist/index.js');
@@ -150,7 +153,7 @@ describe('the packed packages in a fresh npm project', () => {
     await sh('npx', ['tsc', '-p', 'tsconfig.bundler.json']);
   }, TIMEOUT_MS);
 
-  it('the example runs: a 45° NPS 8 on NPS 12 lateral written as SVG and DXF', async () => {
+  it('the example runs: a 45° NPS 8 on NPS 12 lateral written as SVG, DXF and PDF', async () => {
     if (!existsSync(join(app, 'dist', 'example.js'))) await sh('npx', ['tsc', '-p', 'tsconfig.nodenext.json']);
     const { stdout } = await sh('node', ['dist/example.js']);
     const out = JSON.parse(stdout.trim().split('\n').at(-1)!) as { stretchOut: number; code: string };
@@ -163,6 +166,7 @@ describe('the packed packages in a fresh npm project', () => {
     expect(svg).toMatch(/width="[0-9.]+in"/);
     const dxf = readFileSync(join(app, 'lateral-hole.dxf'), 'utf8');
     expect(dxf.trim().endsWith('EOF')).toBe(true);
+    expect(readFileSync(join(app, 'lateral.pdf')).subarray(0, 5).toString('latin1')).toBe('%PDF-');
     for (const file of readmeFiles) await sh('node', [join('dist', file.replace(/\.ts$/, '.js'))]);
   }, TIMEOUT_MS);
 

@@ -1,6 +1,7 @@
 /**
  * The top-level help text.
  */
+import { PRINT_OPTIONS_HELP } from './print-options.js';
 import { CAUTION as REPORT_CAUTION } from '@girth/pipes';
 import { JOINTS } from './joints/registry.js';
 
@@ -30,15 +31,17 @@ ${REPORT_CAUTION}
 /** `girth run --help`. */
 export const RUN_HELP = `girth run: lay out every piece of a job file
 
-Usage: girth run JOB.json --out DIR [--force]
+Usage: girth run JOB.json --out DIR [--force] [--packet [--paper NAME ...]]
 
 Example:
   girth run fixtures/demo/job.json --out demo-out
 
 Writes, for each piece, its templates as SVG and DXF and its station tables as
 CSV (the job's "outputs" list may narrow that), named after the piece label,
-and one summary.txt with the summary table and every ordinate table. Nothing is
-written if any piece is in error. DIR is the job's own folder: it appears
+and one summary.txt with the summary table and every ordinate table. With
+--packet, DIR also holds job-packet.pdf, ready to print and take to the pipe:
+a cover with the job, the cut list and the caution, then every piece's sheets
+at true size and its ordinate tables. Nothing is written if any piece is in error. DIR is the job's own folder: it appears
 complete at once (built beside it, then moved in). An existing DIR that holds
 files is kept unless --force, which replaces the whole set; a folder holding
 files Girth did not write is never replaced. A run that was killed is repaired
@@ -55,6 +58,9 @@ Keys of a piece are those of its command's options in camelCase (radiusNps,
 includedAngle, branchSurface); lengths are text ("2 1/2\\"", "63.5mm") or numbers
 in the job's unit. Optional job keys: decimal, fraction (8|16|32),
 dxfVersion ("2007"|"r12"), outputs (["svg","dxf","csv"]).
+
+Printing the packet (with --packet; lengths in the job's unit):
+${PRINT_OPTIONS_HELP}
 
 ${REPORT_CAUTION}
 `;

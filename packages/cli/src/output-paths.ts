@@ -13,6 +13,7 @@ const KNOWN_EXTENSIONS: Readonly<Record<string, string>> = {
   '.csv': 'CSV',
   '.json': 'JSON',
   '.txt': 'text',
+  '.pdf': 'PDF',
 };
 
 /**

@@ -9,13 +9,17 @@ import { templateToSvg } from '@girth/svg';
 import { stationTableCsv, type TableLengthFormat } from '@girth/table';
 import type { LayoutResult, Template } from '@girth/unroll';
 import { checkOutputPath } from './output-paths.js';
-import type { PlannedFile } from './write-files.js';
+import type { PlannedFile, PlannedTextFile } from './write-files.js';
+import type { PdfOptions } from '@girth/pdf';
+import { jointPdf } from './pdf-outputs.js';
 
 /** Where to write each kind of output; absent kinds are not written. */
 export interface OutputRequest {
   readonly svg?: string;
   readonly dxf?: string;
   readonly csv?: string;
+  /** One PDF of every template's sheet (written by `planPdfOutput`). */
+  readonly pdf?: string;
 }
 
 /** How outputs look: unit, table style, DXF version, labels. */
@@ -48,11 +52,12 @@ export function templatePath(path: string, template: Template, templateCount: nu
  *   or ends in another format's extension (see {@link checkOutputPath}).
  * @example planOutputs(result, { svg: 'tee.svg' }, style).map((f) => f.path)
  */
-export function planOutputs(result: LayoutResult, request: OutputRequest, style: OutputStyle): readonly PlannedFile[] {
+export function planOutputs(result: LayoutResult, request: OutputRequest, style: OutputStyle): readonly PlannedTextFile[] {
   if (request.svg !== undefined) checkOutputPath('--svg', '.svg', request.svg);
   if (request.dxf !== undefined) checkOutputPath('--dxf', '.dxf', request.dxf);
   if (request.csv !== undefined) checkOutputPath('--csv', '.csv', request.csv);
-  const files: PlannedFile[] = [];
+  if (request.pdf !== undefined) checkOutputPath('--pdf', '.pdf', request.pdf);
+  const files: PlannedTextFile[] = [];
   const count = result.templates.length;
   const labels = { ...(style.job !== undefined ? { job: style.job } : {}), ...(style.piece !== undefined ? { piece: style.piece } : {}) };
   for (const template of result.templates) {
@@ -73,4 +78,17 @@ export function planOutputs(result: LayoutResult, request: OutputRequest, style:
     }
   }
   return files;
+}
+
+/**
+ * The `--pdf` file of a layout: every template's sheet in one PDF (the path
+ * as given, whatever the number of templates), or none when not asked for.
+ * @throws GirthError from `@girth/pdf`, named by the option typed (`--paper`,
+ *   `--page-overlap`, `--page-margin`).
+ * @example await planPdfOutput(result, { pdf: 'tee.pdf' }, style, { paper: 'a4' })
+ */
+export async function planPdfOutput(result: LayoutResult, request: OutputRequest, style: OutputStyle, print: PdfOptions = {}): Promise<readonly PlannedFile[]> {
+  if (request.pdf === undefined) return [];
+  const content = await jointPdf(result, { units: style.units, ...(style.job !== undefined ? { job: style.job } : {}), ...(style.piece !== undefined ? { piece: style.piece } : {}) }, print);
+  return [{ option: '--pdf', path: request.pdf, content }];
 }

@@ -11,6 +11,7 @@ import { CAUTION, GirthError } from '@girth/pipes';
 import { parseOptions, stringOption } from './args.js';
 import { COMMON_OPTIONS, COMMON_OPTIONS_HELP } from './commands/common-options.js';
 import { mainHelp, RUN_HELP } from './help.js';
+import { PRINT_OPTIONS } from './print-options.js';
 import type { CliIo } from './io.js';
 import { JOINTS, jointNamed } from './joints/registry.js';
 import { printable } from './labels.js';
@@ -76,7 +77,7 @@ export async function runCommand(argv: readonly string[], io: CliIo): Promise<vo
 }
 
 async function runJobCommand(argv: readonly string[], io: CliIo): Promise<void> {
-  const args = parseOptions(argv, { out: { type: 'string', short: 'o' }, force: { type: 'boolean' }, help: { type: 'boolean', short: 'h' } }, true);
+  const args = parseOptions(argv, { out: { type: 'string', short: 'o' }, force: { type: 'boolean' }, packet: { type: 'boolean' }, ...PRINT_OPTIONS, help: { type: 'boolean', short: 'h' } }, true);
   if (args.values.help === true) {
     io.out(RUN_HELP);
     return;
@@ -86,5 +87,5 @@ async function runJobCommand(argv: readonly string[], io: CliIo): Promise<void> 
   if (extra.length > 0) throw new GirthError('BAD_OPTION', 'job', `run: one job file at a time; unexpected "${extra[0]}"`);
   const outDir = stringOption(args, 'out');
   if (outDir === undefined) throw new GirthError('MISSING_INPUT', '--out', '--out: required, the folder for the templates, e.g. --out out/');
-  await (await import('./commands/run-command.js')).runJobFile(jobPath, outDir, args.values.force === true, io);
+  await (await import('./commands/run-command.js')).runJobFile(jobPath, outDir, args.values.force === true, io, args);
 }

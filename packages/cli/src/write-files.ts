@@ -23,12 +23,17 @@ import { GirthError } from '@girth/pipes';
 import { fileInTheWay, lstatOrUndefined, statOrUndefined } from './fs-probe.js';
 import { asFsError } from './fs-errors.js';
 
-/** One file to write: where, its whole content, and the option that named it. */
+/** One file to write: where, its whole content (text as UTF-8, or bytes), and the option that named it. */
 export interface PlannedFile {
   readonly path: string;
-  readonly content: string;
+  readonly content: string | Uint8Array;
   /** The option the path came from (`--svg`), for messages; default the writer's `field`. */
   readonly option?: string;
+}
+
+/** A planned file of text (SVG, DXF, CSV, summary), written as UTF-8. */
+export interface PlannedTextFile extends PlannedFile {
+  readonly content: string;
 }
 
 /** How {@link writeFilesAtomically} behaves. */

@@ -9,6 +9,8 @@ import { choiceOption, numberOption, optionalChoice, stringOption, type OptionSp
 import { checkLabel } from '../labels.js';
 import type { JointContext } from '../joints/types.js';
 import type { OutputRequest, OutputStyle } from '../outputs.js';
+import type { PdfOptions } from '@girth/pdf';
+import { PRINT_OPTIONS, PRINT_OPTIONS_HELP, readPrintOptions } from '../print-options.js';
 
 /** The option definitions shared by all joint commands. */
 export const COMMON_OPTIONS: OptionSpec = {
@@ -25,6 +27,8 @@ export const COMMON_OPTIONS: OptionSpec = {
   'develop-on': { type: 'string' },
   'rolled-plate': { type: 'string' },
   'dxf-text': { type: 'string' },
+  pdf: { type: 'string' },
+  ...PRINT_OPTIONS,
   json: { type: 'boolean' },
   job: { type: 'string' },
   piece: { type: 'string' },
@@ -55,6 +59,9 @@ For a cutting table (SVG, DXF, CSV and JSON all show the same part):
                          the pipe (default each pipe's wall)
   --dxf-text text|none|stroke  DXF text as text, left out, or single-stroke
                          lines on MARK for a table that etches (with --dxf)
+  --pdf FILE             every sheet at true size in one PDF, tiled on office paper
+                         with an assembly map, or one page per roll width
+${PRINT_OPTIONS_HELP}
   --json                 print the result as JSON on standard output
   --job TEXT, --piece TEXT  labels printed on every sheet
   --force                overwrite existing files
@@ -68,6 +75,8 @@ export interface CommonSettings {
   readonly ctx: JointContext;
   readonly style: OutputStyle;
   readonly request: OutputRequest;
+  /** How to print the PDF, when `--pdf` is given. */
+  readonly print?: PdfOptions;
   readonly json: boolean;
   readonly force: boolean;
 }
@@ -90,6 +99,7 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
     ...(stringOption(args, 'svg') !== undefined ? { svg: stringOption(args, 'svg')! } : {}),
     ...(stringOption(args, 'dxf') !== undefined ? { dxf: stringOption(args, 'dxf')! } : {}),
     ...(stringOption(args, 'csv') !== undefined ? { csv: stringOption(args, 'csv')! } : {}),
+    ...(stringOption(args, 'pdf') !== undefined ? { pdf: stringOption(args, 'pdf')! } : {}),
   };
   const cutting = readCuttingOptions(args, units);
   const dxfTextChoice = optionalChoice(args, 'dxf-text', ['text', 'none', 'stroke'] as const);
@@ -97,6 +107,7 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
     throw new GirthError('BAD_OPTION', '--dxf-text', '--dxf-text: no DXF is written; give --dxf FILE too, or leave --dxf-text out');
   }
   const dxfText: DxfTextMode = dxfTextChoice ?? 'text';
+  const print = readPrintOptions(args, units, request.pdf !== undefined, '--pdf FILE');
   return {
     cutting,
     ctx: {
@@ -108,6 +119,7 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
     },
     style: { units, tableFormat, fraction, dxfVersion, dxfText, ...(job !== undefined ? { job } : {}), ...(piece !== undefined ? { piece } : {}) },
     request,
+    ...(print !== undefined ? { print } : {}),
     json: args.values.json === true,
     force: args.values.force === true,
   };

@@ -8,7 +8,7 @@ import type { ParsedArgs } from '../args.js';
 import type { JointDefinition } from '../joints/definition.js';
 import { layoutJoint } from '../joints/layout-joint.js';
 import type { JointInput } from '../joints/registry.js';
-import { planOutputs } from '../outputs.js';
+import { planOutputs, planPdfOutput } from '../outputs.js';
 import { prepareForCutting } from '../cutting-parts.js';
 import { toResultJson } from '@girth/table';
 import { layoutReportText, REPORT_CAUTION } from '../report.js';
@@ -22,7 +22,7 @@ import { readCommonOptions } from './common-options.js';
 export async function runJointCommand(joint: JointDefinition<JointInput>, args: ParsedArgs, io: CliIo): Promise<void> {
   const settings = readCommonOptions(args);
   const result = prepareForCutting(layoutJoint(joint.fromOptions(args), settings.ctx), settings.cutting, settings.ctx.units, settings.ctx.describe);
-  const files = planOutputs(result, settings.request, settings.style);
+  const files = [...planOutputs(result, settings.request, settings.style), ...(await planPdfOutput(result, settings.request, settings.style, settings.print))];
   const written = await writeFilesAtomically(files, { force: settings.force, onNote: io.err });
   if (settings.json) {
     io.out(`${JSON.stringify(toResultJson(result, { units: settings.ctx.units }), null, 2)}\n`);

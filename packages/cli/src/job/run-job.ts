@@ -12,15 +12,19 @@ import type { JointContext } from '../joints/types.js';
 import { planOutputs, type OutputStyle } from '../outputs.js';
 import { prepareForCutting, type CuttingSettings } from '../cutting-parts.js';
 import { layoutReportText, REPORT_CAUTION, type ReportStyle } from '../report.js';
-import type { PlannedFile } from '../write-files.js';
+import type { PlannedTextFile } from '../write-files.js';
 import { alignSummary, summaryRow } from './summary-table.js';
 import type { Job } from './schema.js';
 
 /** A job laid out: each piece's result and every file to write. */
 export interface JobPlan {
   readonly results: readonly { readonly piece: string; readonly result: LayoutResult }[];
-  readonly files: readonly PlannedFile[];
+  readonly files: readonly PlannedTextFile[];
   readonly summary: string;
+  /** The summary table alone (the job's cut list). */
+  readonly cutList: string;
+  /** Each piece's printed report with its ordinate tables, in the order of `results`. */
+  readonly reports: readonly string[];
 }
 
 /** A file-name stem from a piece label: `FG-12 SP-03 tee` → `fg-12-sp-03-tee`. */
@@ -58,7 +62,7 @@ export function refuseIdleJobKeys(job: Job): void {
 export interface PiecePlan {
   readonly piece: string;
   readonly result: LayoutResult;
-  readonly files: readonly PlannedFile[];
+  readonly files: readonly PlannedTextFile[];
   /** The piece's row of the summary table (piece, joint, pipes, figures, templates). */
   readonly row: readonly string[];
   /** The piece's report in the summary (its station tables). */
@@ -167,7 +171,7 @@ export const SUMMARY_TAIL = `${REPORT_CAUTION}\n`;
  */
 export function planJob(job: Job, outDir: string): JobPlan {
   const results: { piece: string; result: LayoutResult }[] = [];
-  const files: PlannedFile[] = [];
+  const files: PlannedTextFile[] = [];
   const rows: (readonly string[])[] = [];
   const texts: string[] = [];
   for (const p of planPieces(job, outDir)) {
@@ -178,5 +182,5 @@ export function planJob(job: Job, outDir: string): JobPlan {
   }
   const summary = summaryHead(job, rows) + texts.map((t) => `${t}\n`).join('') + SUMMARY_TAIL;
   files.push({ path: join(outDir, 'summary.txt'), content: summary });
-  return { results, files, summary };
+  return { results, files, summary, cutList: alignSummary(rows), reports: texts };
 }

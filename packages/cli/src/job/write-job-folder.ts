@@ -96,7 +96,7 @@ export type JobFileSource = (sink: JobFolderSink) => Promise<void>;
  *
  * Without `force`, `outDir` must not exist or be empty. With `force`, an
  * existing `outDir` is replaced only when it is a set Girth wrote (it holds
- * the marker, or only a `summary.txt` beside SVG, DXF, CSV and text files);
+ * the marker, or only a `summary.txt` beside SVG, DXF, CSV, PDF and text files);
  * a folder holding anything else is refused, never deleted.
  *
  * @returns the absolute path of the folder and how many files it holds.
@@ -222,7 +222,7 @@ export async function recoverJobFolder(dir: string, onNote?: (text: string) => v
 function isGirthSet(dir: string, entries: readonly string[]): boolean {
   if (entries.includes(SET_MARKER)) return true;
   if (!entries.includes('summary.txt')) return false;
-  return entries.every((e) => /\.(svg|dxf|csv|txt|tmp)$/i.test(e) && lstatOrUndefined(join(dir, e))?.isFile() === true);
+  return entries.every((e) => /\.(svg|dxf|csv|txt|pdf|tmp)$/i.test(e) && lstatOrUndefined(join(dir, e))?.isFile() === true);
 }
 
 /** The folder to write: `outDir` resolved, through a symbolic link to a folder. */

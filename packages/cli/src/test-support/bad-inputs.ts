@@ -50,6 +50,17 @@ export const BAD_OPTIONS: readonly BadOptionCase[] = [
   { name: 'an option given twice', argv: [...TEE, '--angle', '45', '--angle', '90'], code: 'BAD_OPTION', field: '--angle' },
   { name: 'a stray word', argv: [...TEE, 'extra'], code: 'BAD_OPTION', field: 'arguments' },
   { name: 'a label that starts with a dash, not joined', argv: [...TEE, '--job', '-x'], code: 'BAD_OPTION', field: '--job' },
+  // Printing a PDF: paper, overlap and margin against the page, pages per sheet.
+  { name: 'an unknown paper', argv: [...TEE, '--pdf', 'tee.pdf', '--paper', 'a5'], code: 'BAD_CHOICE', field: '--paper' },
+  { name: 'a paper without --pdf', argv: [...TEE, '--paper', 'a4'], code: 'BAD_OPTION', field: '--paper' },
+  { name: 'a page overlap without --pdf', argv: [...TEE, '--page-overlap', '1'], code: 'BAD_OPTION', field: '--page-overlap' },
+  { name: 'an unknown orientation', argv: [...TEE, '--pdf', 'tee.pdf', '--orientation', 'sideways'], code: 'BAD_CHOICE', field: '--orientation' },
+  { name: 'a page overlap of half the Letter drawing window or more', argv: [...TEE, '--pdf', 'tee.pdf', '--page-overlap', '5'], code: 'OUT_OF_RANGE', field: '--page-overlap' },
+  { name: 'a page margin over a quarter of the Letter short side', argv: [...TEE, '--pdf', 'tee.pdf', '--page-margin', '3'], code: 'OUT_OF_RANGE', field: '--page-margin' },
+  { name: 'a negative page margin', argv: [...TEE, '--pdf', 'tee.pdf', '--page-margin=-1'], code: 'NEGATIVE', field: '--page-margin' },
+  { name: 'a PDF named as an SVG', argv: [...TEE, '--pdf', 'tee.svg'], code: 'BAD_OPTION', field: '--pdf' },
+  // A 2000 mm pipe cut back 60°: a 6343 x 1264 mm sheet, 216 Letter pages.
+  { name: 'a sheet that needs more than 200 pages', argv: ['cutback', '--pipe', '2000 mm x 20 mm', '--angle', '60', '--pdf', 'huge.pdf'], code: 'OUT_OF_RANGE', field: '--paper' },
   // Required options.
   { name: 'a branch without its header', argv: without(TEE, '--header'), code: 'MISSING_INPUT', field: '--header' },
   { name: 'a branch without its branch pipe', argv: without(TEE, '--branch'), code: 'MISSING_INPUT', field: '--branch' },
