@@ -33,6 +33,7 @@ export type SheetPathRole = 'cut' | 'square-line' | 'station-line' | 'mark' | 'o
 /** What a piece of text is for. */
 export type SheetTextRole =
   | 'station-number'
+  | 'line-name'
   | 'label'
   | 'overlap'
   | 'title-job'
@@ -121,7 +122,7 @@ export interface SheetPlan {
   readonly page: { readonly left: number; readonly top: number; readonly widthMm: number; readonly heightMm: number };
   /** What is drawn, title block excluded, mm (y-up): lines grown by half the widest stroke, and their text. */
   readonly drawing: Box;
-  /** In drawing order: glue tab, marks, station lines and numbers, square line, cut, labels, title block, calibration. */
+  /** In drawing order: glue tab, marks, station lines, numbers and quarter-line names, square line, cut, labels, title block, calibration. */
   readonly items: readonly SheetItem[];
 }
 

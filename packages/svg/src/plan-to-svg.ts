@@ -115,6 +115,11 @@ function stationsGroup(r: ByRole, frame: Frame, w: NumberWriter): string {
       { class: 'station-numbers', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle' },
       (r.texts.get('station-number') ?? []).map((t) => textNode(t, frame, w, { 'data-station': (t.stations ?? []).join(' ') })),
     ),
+    el(
+      'g',
+      { class: 'line-names', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle', 'font-weight': 'bold' },
+      (r.texts.get('line-name') ?? []).map((t) => textNode(t, frame, w)),
+    ),
   ]);
 }
 
