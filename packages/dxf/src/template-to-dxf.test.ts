@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { isGirthError } from '@girth/pipes';
 import { CAUTION, type Template } from '@girth/unroll';
+import { FONT_MM, planSheet, textWidthMm } from '@girth/sheet';
 import { DXF_LAYERS } from './layers.js';
 import { templateToDxf } from './template-to-dxf.js';
 import type { DxfOptions, DxfVersion } from './types.js';
@@ -147,7 +148,9 @@ describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
     const noteLines = texts.filter((x) => x.startsWith('word'));
     expect(noteLines.length).toBeGreaterThan(1);
     expect(noteLines.join(' ').split(' ')).toEqual(words);
-    expect(noteLines.every((l) => l.length <= 110)).toBe(true);
+    // Broken to the drawing's width (the sheet's least width here): each line prints within the page.
+    const page = planSheet(t).page;
+    expect(noteLines.every((l) => textWidthMm(l, FONT_MM.body) <= page.widthMm)).toBe(true);
   });
 
   it('keeps every line of a hostile label one text entity, and adds no other entity', () => {

@@ -48,7 +48,7 @@ function segmentsOf(part: PathPart): [Point2, Point2][] {
 
 /** Text on the drawing (not the title block): station numbers and labels. */
 const drawingText = (plan: SheetPlan): SheetText[] =>
-  plan.items.filter((i): i is SheetText => i.kind === 'text' && (i.role === 'station-number' || i.role === 'line-name' || i.role === 'label'));
+  plan.items.filter((i): i is SheetText => i.kind === 'text' && (i.role === 'station-number' || i.role === 'line-name' || i.role === 'label' || i.role === 'side' || i.role === 'piece-mark'));
 
 /** Every way the plan fails to read: a list of sentences, empty when legible. */
 function problems(plan: SheetPlan): string[] {

@@ -159,3 +159,28 @@ describe('planSheet paper: false', () => {
     expect(e.field).toBe('paper');
   });
 });
+
+describe('planSheet: the sides of the cut and the piece in large print', () => {
+  const sideWords = (plan: ReturnType<typeof planSheet>) => texts(plan.items, 'side').map((t) => t.lines.join(' '));
+  test('a wrap says WASTE between the square line and the cut, PIPE BODY past the cut', () => {
+    const plan = planSheet(wrap());
+    expect(sideWords(plan)).toEqual(['WASTE', 'PIPE BODY']);
+    const [waste, body] = texts(plan.items, 'side');
+    // Plane cut-back: ordinate (D/2) tan(c) (1 - cos phi) (REFERENCES.md): the cut's height at the word's x.
+    const r = 168.275 / 2;
+    const cutAt = (x: number) => r * Math.tan(30 * DEG) * (1 - Math.cos(x / r));
+    const mid = (b: Box): [number, number] => [(b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2];
+    expect(waste!.box.minY).toBeGreaterThan(0);
+    expect(waste!.box.maxY).toBeLessThan(cutAt(mid(waste!.box)[0]));
+    expect(body!.box.minY).toBeGreaterThan(cutAt(mid(body!.box)[0]));
+  });
+
+  test('a hole says WASTE inside the hole; the piece and title stand in large print over the drawing', () => {
+    const plan = planSheet(hole(), { piece: 'SP-07' });
+    expect(sideWords(plan)[0]).toBe('WASTE');
+    const [piece] = texts(plan.items, 'piece-mark');
+    expect(piece!.lines.join(' ')).toBe('SP-07 · Hole');
+    expect(piece!.capHeightMm).toBeGreaterThanOrEqual(5 - 1e-9);
+    expect(piece!.box.minY).toBeGreaterThan(Math.max(...hole().stationLines.map((s) => s.to[1])));
+  });
+});

@@ -20,6 +20,7 @@ import { planTitleLines } from './plan/title-lines.js';
 import { planTitleBlock, RULE_MM, titleTextWidthMm } from './plan/title-block.js';
 import { addBox, addPart, newObstacles } from './plan/obstacles.js';
 import { quarterLineNames } from './plan/quarter-lines.js';
+import { planSides } from './plan/sides.js';
 
 /** Box of the lines of a template (cut, square line, stations, marks), template mm. */
 function geometryBox(template: Template): Box {
@@ -178,10 +179,13 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
   const numbers = stationTexts.numbers;
   const lineNames = stationTexts.names;
   const labels = planLabels(template.labels, obstacles);
+  const sides = planSides(template, geometry, obstacles, opts.piece);
+  const sideTexts = [...sides.sides, ...(sides.piece ? [sides.piece] : [])];
   let drawing = growBox(geometry, MAX_STROKE_MM / 2);
   for (const t of numbers) drawing = unionBox(drawing, t.box);
   for (const t of labels) drawing = unionBox(drawing, t.box);
   for (const t of lineNames) drawing = unionBox(drawing, t.box);
+  for (const t of sideTexts) drawing = unionBox(drawing, t.box);
   if (overlap) drawing = unionBox(drawing, growBox(overlap.box, MAX_STROKE_MM / 2));
 
   const title = titleItems(template, opts, drawing);
@@ -197,6 +201,8 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
     ...(template.kind === 'wrap' ? [{ kind: 'path', role: 'square-line', layer: 'mark', part: template.squareLine } as const] : []),
     ...template.cut.map((part): SheetItem => ({ kind: 'path', role: 'cut', layer: 'cut', part })),
     ...labels.map((t) => centred(t, 'label', true)),
+    ...sides.sides.map((t) => centred(t, 'side', true)),
+    ...(sides.piece ? [centred(sides.piece, 'piece-mark', true)] : []),
     ...title.items,
   ];
   const plan: SheetPlan = {

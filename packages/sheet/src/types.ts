@@ -35,6 +35,8 @@ export type SheetTextRole =
   | 'station-number'
   | 'line-name'
   | 'label'
+  | 'side'
+  | 'piece-mark'
   | 'overlap'
   | 'title-job'
   | 'title-title'

@@ -165,7 +165,7 @@ function calibrationGroup(r: ByRole, frame: Frame, w: NumberWriter): string {
  * `viewBox` matches them, so one user unit is one mm (or one inch). Template
  * coordinates (mm, y-up) are flipped onto the paper (y-down) about the plan's
  * page. Groups with stable ids: `overlap`, `marks`, `stations`, `square-line`,
- * `cut`, `labels`, `title-block`, `calibration` (always present, empty when
+ * `cut`, `labels`, `sides` (WASTE and the kept side, the piece in large print), `title-block`, `calibration` (always present, empty when
  * there is nothing to draw). Numbers are rounded to 0.001 mm (0.00001 in).
  *
  * @param plan - a plan from `planSheet` of `@girth/sheet` (already checked).
@@ -202,6 +202,11 @@ export function planToSvg(plan: SheetPlan): string {
         'g',
         { id: 'labels', class: 'labels', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle', 'font-weight': 'bold' },
         (r.texts.get('label') ?? []).map((t) => textNode(t, frame, w)),
+      ),
+      el(
+        'g',
+        { id: 'sides', class: 'sides', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle', 'font-weight': 'bold' },
+        [...(r.texts.get('side') ?? []), ...(r.texts.get('piece-mark') ?? [])].map((t) => textNode(t, frame, w, { class: t.role })),
       ),
       titleBlockGroup(plan, r, frame, w),
       calibrationGroup(r, frame, w),
