@@ -179,7 +179,7 @@ describe('planSheet: the sides of the cut and the piece in large print', () => {
     const plan = planSheet(hole(), { piece: 'SP-07' });
     expect(sideWords(plan)[0]).toBe('WASTE');
     const [piece] = texts(plan.items, 'piece-mark');
-    expect(piece!.lines.join(' ')).toBe('SP-07 · Hole');
+    expect(piece!.lines.join(' ')).toBe('SP-07 - Hole');
     expect(piece!.capHeightMm).toBeGreaterThanOrEqual(5 - 1e-9);
     expect(piece!.box.minY).toBeGreaterThan(Math.max(...hole().stationLines.map((s) => s.to[1])));
   });

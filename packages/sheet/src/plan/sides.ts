@@ -112,7 +112,7 @@ export function planSides(template: Template, geometry: Box, obstacles: Obstacle
   if (kept) sides.push(kept);
 
   const pieceFont = PIECE_CAP_MM / CAP_HEIGHT_EM;
-  const head = [piece === undefined ? '' : textLines(piece).join(' ').trim(), textLines(template.title).join(' ')].filter((s) => s.length > 0).join(' · ');
+  const head = [piece === undefined ? '' : textLines(piece).join(' ').trim(), textLines(template.title).join(' ')].filter((s) => s.length > 0).join(' - ');
   const widthMm = Math.max(geometry.maxX - geometry.minX, PIECE_MIN_WIDTH_MM);
   const lines = wrapToWidth(head, widthMm, pieceFont, true);
   const blockMm = CAP_HEIGHT_EM * pieceFont + (lines.length - 1) * LINE_EM * pieceFont;
