@@ -22,7 +22,8 @@ function holeWithArcAndLabel(): Template {
   return {
     ...hole,
     marks: [...hole.marks, { kind: 'arc', center: [127, 63.5], radiusMm: 38.1, startDeg: 30, endDeg: 120 }],
-    labels: [...hole.labels, { text: 'WELD SIDE', at: [50.8, 25.4], heightMm: 12.7 }],
+    // Far above the hole, where nothing else is placed, so the label stays on its own point.
+    labels: [...hole.labels, { text: 'WELD SIDE', at: [50.8, 254], heightMm: 12.7 }],
   };
 }
 
@@ -41,7 +42,7 @@ describe.each(['AC1021', 'R12'] as const)('templateToDxf %s', (version: DxfVersi
       // is at the point's x and half the cap height (12.7 / 2 mm) below it.
       const at = label!.endPoint ?? (label!.startPoint as { x: number; y: number });
       expect(Math.abs(at.x - 50.8 * k)).toBeLessThan(1e-6);
-      expect(Math.abs(at.y - (25.4 - 12.7 / 2) * k)).toBeLessThan(1e-6);
+      expect(Math.abs(at.y - (254 - 12.7 / 2) * k)).toBeLessThan(1e-6);
     });
 
     it(`${units}: every TEXT is as high in ${units} as its mm height divided by ${1 / k}, none 25.4 times too large or small`, () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { isGirthError } from '@girth/pipes';
 import { CAUTION, type Template } from '@girth/unroll';
+import { FONT_MM, planSheet, textWidthMm } from '@girth/sheet';
 import { DXF_LAYERS } from './layers.js';
 import { templateToDxf } from './template-to-dxf.js';
 import type { DxfOptions, DxfVersion } from './types.js';
@@ -152,7 +153,9 @@ describe.each(VERSIONS)('templateToDxf, version %s', (version) => {
     const noteLines = texts.filter((x) => x.startsWith('word'));
     expect(noteLines.length).toBeGreaterThan(1);
     expect(noteLines.join(' ').split(' ')).toEqual(words);
-    expect(noteLines.every((l) => l.length <= 110)).toBe(true);
+    // Broken to the drawing's width (the sheet's least width here): each line prints within the page.
+    const page = planSheet(t).page;
+    expect(noteLines.every((l) => textWidthMm(l, FONT_MM.body) <= page.widthMm)).toBe(true);
   });
 
   it('keeps every line of a hostile label one text entity, and adds no other entity', () => {
@@ -248,7 +251,9 @@ describe('templateToDxf, checked by ezdxf', () => {
       expect(report.counts[polylineType], key).toBe(1);
       expect(report.closedByLayer['CUT'] ?? 0, key).toBe(key.startsWith('wrap') ? 0 : 1);
       expect(report.texts, key).toContain('Job: J-4471 %%c - Piece: SP-09 0 LINE');
-      expect(report.texts.filter((t) => t.includes('CAUTION')), key).toEqual([CAUTION]);
+      // The caution is broken into lines to the sheet's width: once, and whole when its lines are read in order.
+      expect(report.texts.filter((t) => t.includes('CAUTION')), key).toHaveLength(1);
+      expect(report.texts.join(' '), key).toContain(CAUTION);
     }
   });
 });

@@ -3,7 +3,6 @@ import fc from 'fast-check';
 import { girthErrorOf } from '@girth/pipes/test-support';
 import type { HoleTemplate, StationLine, WrapTemplate } from '@girth/unroll';
 import { planSheet } from './plan-sheet.js';
-import { FONT_MM } from './style.js';
 import type { Box, SheetText } from './types.js';
 
 const DEG = Math.PI / 180;
@@ -96,33 +95,25 @@ describe('planSheet', () => {
     for (const n of numbers) expect(n.box.maxY).toBeLessThan(0);
   });
 
-  test('stations sharing a start point share one number, e.g. 2/8 on a tee hole (sin phi = sin(180° − phi))', () => {
-    const numbers = texts(planSheet(hole()).items, 'station-number').map((n) => n.lines[0]);
-    expect(numbers).toContain('2/8');
-    expect(numbers).toContain('1/9');
-    expect(numbers).toContain('10/16');
+  test('a tee hole numbers every station on its own, past the hole edge: no "2/8" that reads as a fraction', () => {
+    const plan = planSheet(hole());
+    const numbers = texts(plan.items, 'station-number');
+    expect(numbers.map((n) => n.lines[0])).toEqual(Array.from({ length: 16 }, (_, i) => String(i + 1)));
+    // Each number lies past its line's hole-edge end: farther from the girth line (y = 0) than the edge.
+    for (const n of numbers) {
+      const line = hole().stationLines[n.stations![0]! - 1]!;
+      const y = (n.box.minY + n.box.maxY) / 2;
+      if (Math.abs(line.to[1]) > 1) expect(Math.sign(y)).toBe(Math.sign(line.to[1]));
+      expect(Math.abs(y)).toBeGreaterThan(Math.abs(line.to[1]));
+    }
+    expect(numbers[0]!.capHeightMm).toBeGreaterThanOrEqual(3);
   });
 
-  test('grouping and sizing agree with comparing every pair (brute force) on random start points', () => {
-    fc.assert(
-      fc.property(fc.array(fc.tuple(fc.integer({ min: -40, max: 40 }), fc.integer({ min: -5, max: 5 })), { minLength: 1, maxLength: 60 }), (pts) => {
-        // Points on a 0.5 mm grid: distinct ones are at least 0.5 mm apart, equal ones share a number.
-        const lines: StationLine[] = pts.map(([x, y], i) => ({ n: i + 1, angleDeg: 0, from: [x / 2, y / 2], to: [x / 2, y / 2 + 10] }));
-        const t: WrapTemplate = { ...wrap(), stationLines: lines };
-        const numbers = texts(planSheet(t).items, 'station-number');
-        const keys = new Map<string, number[]>();
-        lines.forEach((l) => keys.set(l.from.join(','), [...(keys.get(l.from.join(',')) ?? []), l.n]));
-        expect(numbers.map((n) => n.stations)).toEqual([...keys.values()]);
-        let minGap = Infinity;
-        const starts = [...keys.keys()].map((k) => k.split(',').map(Number));
-        for (let i = 0; i < starts.length; i++)
-          for (let j = i + 1; j < starts.length; j++) minGap = Math.min(minGap, Math.hypot(starts[i]![0]! - starts[j]![0]!, starts[i]![1]! - starts[j]![1]!));
-        const widestEm = Math.max(1, ...[...keys.values()].map((ns) => ns.join('/').length * 0.7 + (ns.length - 1) * -0.25));
-        expect(numbers[0]!.fontMm).toBeLessThanOrEqual(FONT_MM.stationNumber);
-        if (Number.isFinite(minGap)) expect(numbers[0]!.fontMm).toBeLessThanOrEqual(Math.max(1.2, (0.8 * minGap) / widestEm) + 1e-9);
-      }),
-      { numRuns: 100 },
-    );
+  test('numbers of close stations step out in rows instead of overlapping (NPS 1/2, 64 stations)', () => {
+    const plan = planSheet(wrap(21.336, 30, 64));
+    const numbers = texts(plan.items, 'station-number');
+    expect(numbers).toHaveLength(64);
+    expect(new Set(numbers.map((n) => n.at[1].toFixed(6))).size).toBeGreaterThan(1);
   });
 
   test('the placement line says what each kind goes on: a miter wrap from the throat line, a hole on its OD', () => {
@@ -166,5 +157,30 @@ describe('planSheet paper: false', () => {
     const e = girthErrorOf(() => planSheet(wrap(), { paper: 'no' as unknown as boolean }));
     expect(e.code).toBe('BAD_OPTION');
     expect(e.field).toBe('paper');
+  });
+});
+
+describe('planSheet: the sides of the cut and the piece in large print', () => {
+  const sideWords = (plan: ReturnType<typeof planSheet>) => texts(plan.items, 'side').map((t) => t.lines.join(' '));
+  test('a wrap says WASTE between the square line and the cut, PIPE BODY past the cut', () => {
+    const plan = planSheet(wrap());
+    expect(sideWords(plan)).toEqual(['WASTE', 'PIPE BODY']);
+    const [waste, body] = texts(plan.items, 'side');
+    // Plane cut-back: ordinate (D/2) tan(c) (1 - cos phi) (REFERENCES.md): the cut's height at the word's x.
+    const r = 168.275 / 2;
+    const cutAt = (x: number) => r * Math.tan(30 * DEG) * (1 - Math.cos(x / r));
+    const mid = (b: Box): [number, number] => [(b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2];
+    expect(waste!.box.minY).toBeGreaterThan(0);
+    expect(waste!.box.maxY).toBeLessThan(cutAt(mid(waste!.box)[0]));
+    expect(body!.box.minY).toBeGreaterThan(cutAt(mid(body!.box)[0]));
+  });
+
+  test('a hole says WASTE inside the hole; the piece and title stand in large print over the drawing', () => {
+    const plan = planSheet(hole(), { piece: 'SP-07' });
+    expect(sideWords(plan)[0]).toBe('WASTE');
+    const [piece] = texts(plan.items, 'piece-mark');
+    expect(piece!.lines.join(' ')).toBe('SP-07 - Hole');
+    expect(piece!.capHeightMm).toBeGreaterThanOrEqual(5 - 1e-9);
+    expect(piece!.box.minY).toBeGreaterThan(Math.max(...hole().stationLines.map((s) => s.to[1])));
   });
 });

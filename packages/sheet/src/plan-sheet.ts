@@ -8,7 +8,7 @@ import type { Box, ResolvedSheetOptions, SheetItem, SheetOptions, SheetPlan, She
 import { resolveSheetOptions } from './options.js';
 import { checkTemplate } from './check-template.js';
 import { checkPlan } from './check-plan.js';
-import { ASCENT_EM, CAP_HEIGHT_EM, DESCENT_EM, HATCH_SPACING_MM, LINE_EM, MAX_STROKE_MM, TEXT_INSET_EM, TITLE_GAP_MM } from './style.js';
+import { ASCENT_EM, CAP_HEIGHT_EM, DESCENT_EM, HATCH_SPACING_MM, LINE_EM, MAX_STROKE_MM, MIN_SHEET_WIDTH_MM, TEXT_INSET_EM, TITLE_GAP_MM } from './style.js';
 import { EMPTY_BOX, growBox, partBox, pointsBox, unionBox } from './internal/box.js';
 import type { CentredText } from './internal/text-box.js';
 import { textWidthMm } from './internal/text-metrics.js';
@@ -17,7 +17,10 @@ import { planLabels } from './plan/labels.js';
 import { planOverlap, type OverlapPlan } from './plan/overlap.js';
 import { hatchLines } from './plan/hatch.js';
 import { planTitleLines } from './plan/title-lines.js';
-import { planTitleBlock, RULE_MM } from './plan/title-block.js';
+import { planTitleBlock, RULE_MM, titleTextWidthMm } from './plan/title-block.js';
+import { addBox, addPart, newObstacles } from './plan/obstacles.js';
+import { quarterLineNames } from './plan/quarter-lines.js';
+import { planSides } from './plan/sides.js';
 import { planBevelBands } from './plan/bevel-band.js';
 import { planFitUpItems } from './plan/fit-up-items.js';
 
@@ -93,16 +96,18 @@ function overlapItems(o: OverlapPlan): SheetItem[] {
 }
 
 function titleItems(template: Template, opts: ResolvedSheetOptions, drawing: Box): { items: SheetItem[]; widthMm: number; heightMm: number } {
-  const title = planTitleBlock(planTitleLines(template, opts), opts.sheetUnits, opts.textScale);
+  // The drawing sets the width; a small drawing gets the least width a title block needs.
+  const widthMm = Math.max(drawing.maxX - drawing.minX, MIN_SHEET_WIDTH_MM * opts.textScale);
+  const title = planTitleBlock(planTitleLines(template, opts, titleTextWidthMm(widthMm)), opts.sheetUnits, opts.textScale, widthMm);
   const left = drawing.minX;
   const top = drawing.minY - TITLE_GAP_MM;
-  const contentW = Math.max(drawing.maxX - drawing.minX, title.widthMm);
+  const contentW = title.widthMm;
   const items: SheetItem[] = [
     ...(opts.paper ? [titleRule(left, top, contentW)] : []),
-    ...title.lines.map((l) =>
-      leftText(l.text, left + TEXT_INSET_EM * l.fontMm, top - l.baselineMm, l.fontMm, l.bold, `title-${l.role}`, 'text'),
+    ...title.lines.map((l) => leftText(l.text, left + l.xMm, top - l.baselineMm, l.fontMm, l.bold, `title-${l.role}`, 'text')),
+    ...title.caution.lines.map((text, i) =>
+      leftText(text, left + TEXT_INSET_EM * title.caution.fontMm, top - title.caution.baselineMm - i * LINE_EM * title.caution.fontMm, title.caution.fontMm, true, 'caution', 'text'),
     ),
-    leftText(title.caution.text, left + TEXT_INSET_EM * title.caution.fontMm, top - title.caution.baselineMm, title.caution.fontMm, true, 'caution', 'text'),
   ];
   if (opts.paper) items.push(...paperBarItems(left, top, title));
   return { items, widthMm: contentW, heightMm: title.heightMm };
@@ -116,17 +121,20 @@ function titleRule(left: number, top: number, contentW: number): SheetItem {
   return { kind: 'path', role: 'title-rule', layer: 'paper', part: { kind: 'segment', from: [left + RULE_MM / 2, top], to: [left + contentW - RULE_MM / 2, top] } };
 }
 
-/** The calibration bar and its caption, under the title block: `paper` items. */
+/** The calibration L (its arm across, then its arm up) and its caption, in the title block: `paper` items. */
 function paperBarItems(left: number, top: number, title: TitleBlockPlan): SheetItem[] {
+  const c = title.barCaption;
   return [
-    {
-      kind: 'rect',
-      role: 'calibration-bar',
-      layer: 'paper',
-      box: { minX: left, maxX: left + title.bar.lengthMm, maxY: top - title.bar.topMm, minY: top - title.bar.topMm - title.bar.heightMm },
-      filled: true,
-    },
-    leftText(title.barCaption.text, left + title.barCaption.xMm, top - title.barCaption.baselineMm, title.barCaption.fontMm, false, 'calibration-caption', 'paper'),
+    ...title.bars.map(
+      (b): SheetItem => ({
+        kind: 'rect',
+        role: 'calibration-bar',
+        layer: 'paper',
+        box: { minX: left + b.xMm, maxX: left + b.xMm + b.widthMm, maxY: top - b.topMm, minY: top - b.topMm - b.heightMm },
+        filled: true,
+      }),
+    ),
+    ...c.lines.map((text, i) => leftText(text, left + c.xMm, top - c.baselineMm - i * LINE_EM * c.fontMm, c.fontMm, false, 'calibration-caption', 'paper')),
   ];
 }
 
@@ -163,17 +171,30 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
   checkTemplate(template);
 
   const geometry = geometryBox(template);
-  const numbers = opts.stationNumbers ? planStationNumbers(template.stationLines) : [];
-  const labels = planLabels(template.labels);
   const overlap = template.kind === 'wrap' && opts.overlapMm > 0 ? planOverlap(geometry, template.stretchOutMm, opts.overlapMm) : undefined;
+  // Text keeps clear of the cut, the square line, the glue tab and of text placed before it.
+  const obstacles = newObstacles(geometry);
+  for (const part of template.cut) addPart(obstacles, part);
+  if (template.kind === 'wrap') addPart(obstacles, template.squareLine);
+  if (overlap) addBox(obstacles, overlap.box);
+  const stationTexts = opts.stationNumbers
+    ? planStationNumbers(template.stationLines, template.kind, geometry, obstacles, quarterLineNames(template, template.labels))
+    : { numbers: [], names: [] };
+  const numbers = stationTexts.numbers;
+  const lineNames = stationTexts.names;
+  const labels = planLabels(template.labels, obstacles);
+  const sides = planSides(template, geometry, obstacles, opts.piece);
+  const sideTexts = [...sides.sides, ...(sides.piece ? [sides.piece] : [])];
   let drawing = growBox(geometry, MAX_STROKE_MM / 2);
   for (const t of numbers) drawing = unionBox(drawing, t.box);
   for (const t of labels) drawing = unionBox(drawing, t.box);
+  for (const t of lineNames) drawing = unionBox(drawing, t.box);
+  for (const t of sideTexts) drawing = unionBox(drawing, t.box);
   if (overlap) drawing = unionBox(drawing, growBox(overlap.box, MAX_STROKE_MM / 2));
   // The bevel band (weld prep), under everything else drawn: it never crosses the cut line.
   const band = template.kind === 'wrap' && (template.bands?.length ?? 0) > 0 ? planBevelBands(template.bands ?? [], template.stationLines, drawing.minY) : undefined;
   if (band) drawing = unionBox(drawing, band.box);
-  const fitUp = planFitUpItems(template, drawing, [...numbers, ...labels].map((t) => t.box), opts.textScale, centred);
+  const fitUp = planFitUpItems(template, drawing, [...numbers, ...labels, ...lineNames, ...sideTexts].map((t) => t.box), opts.textScale, centred);
   drawing = fitUp.drawing;
 
   const title = titleItems(template, opts, drawing);
@@ -185,9 +206,12 @@ export function planSheet(template: Template, options?: SheetOptions): SheetPlan
       (s): SheetItem => ({ kind: 'path', role: 'station-line', layer: 'mark', part: { kind: 'segment', from: s.from, to: s.to }, station: s.n }),
     ),
     ...numbers.map((t) => centred(t, 'station-number', false, { stations: t.stations })),
+    ...lineNames.map((t) => centred(t, 'line-name', true)),
     ...(template.kind === 'wrap' ? [{ kind: 'path', role: 'square-line', layer: 'mark', part: template.squareLine } as const] : []),
     ...template.cut.map((part): SheetItem => ({ kind: 'path', role: 'cut', layer: 'cut', part })),
     ...labels.map((t) => centred(t, 'label', true)),
+    ...sides.sides.map((t) => centred(t, 'side', true)),
+    ...(sides.piece ? [centred(sides.piece, 'piece-mark', true)] : []),
     ...(band?.items ?? []),
     ...fitUp.items,
     ...title.items,

@@ -47,11 +47,14 @@ export const FONT_MM = {
   title: 4,
   body: 3,
   caution: 2.8,
-  stationNumber: 2.5,
+  /** Cap height 3.07 mm: at least {@link MIN_CAP_MM}. */
+  stationNumber: 4.2,
   overlap: 3,
   calibration: 3,
 } as const;
 
+/** Smallest cap height of any text on the drawing (station numbers, labels), mm: legible at the pipe. */
+export const MIN_CAP_MM = 3;
 /** Cap height of the sans fonts named, as a fraction of the font size (DejaVu Sans 0.73, Arial 0.72). */
 export const CAP_HEIGHT_EM = 0.73;
 /** Ascent above the baseline allowed for any glyph, em. */
@@ -66,6 +69,11 @@ export const TEXT_INSET_EM = 0.1;
 /** Distance between baselines, em. */
 export const LINE_EM = 1.35;
 
+/**
+ * Least width of a sheet's content (title block), mm at text scale 1: room for the
+ * calibration L and its caption; fits across Letter or A4 held upright.
+ */
+export const MIN_SHEET_WIDTH_MM = 180;
 /** Gap between the drawing and the title block, mm. */
 export const TITLE_GAP_MM = 8;
 /** Gap between a station line's end and its number, mm. */

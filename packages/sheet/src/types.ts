@@ -44,7 +44,10 @@ export type SheetPathRole =
 /** What a piece of text is for. */
 export type SheetTextRole =
   | 'station-number'
+  | 'line-name'
   | 'label'
+  | 'side'
+  | 'piece-mark'
   | 'overlap'
   | 'title-job'
   | 'title-title'
@@ -140,7 +143,7 @@ export interface SheetPlan {
   readonly page: { readonly left: number; readonly top: number; readonly widthMm: number; readonly heightMm: number };
   /** What is drawn, title block excluded, mm (y-up): lines grown by half the widest stroke, and their text. */
   readonly drawing: Box;
-  /** In drawing order: glue tab, marks, station lines and numbers, square line, cut, labels, title block, calibration. */
+  /** In drawing order: glue tab, marks, station lines, numbers and quarter-line names, square line, cut, labels, title block, calibration. */
   readonly items: readonly SheetItem[];
 }
 

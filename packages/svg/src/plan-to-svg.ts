@@ -115,6 +115,11 @@ function stationsGroup(r: ByRole, frame: Frame, w: NumberWriter): string {
       { class: 'station-numbers', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle' },
       (r.texts.get('station-number') ?? []).map((t) => textNode(t, frame, w, { 'data-station': (t.stations ?? []).join(' ') })),
     ),
+    el(
+      'g',
+      { class: 'line-names', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle', 'font-weight': 'bold' },
+      (r.texts.get('line-name') ?? []).map((t) => textNode(t, frame, w)),
+    ),
   ]);
 }
 
@@ -190,10 +195,11 @@ function calibrationGroup(r: ByRole, frame: Frame, w: NumberWriter): string {
  * `viewBox` matches them, so one user unit is one mm (or one inch). Template
  * coordinates (mm, y-up) are flipped onto the paper (y-down) about the plan's
  * page. Groups with stable ids: `overlap`, `marks`, `stations`, `square-line`,
- * `cut`, `labels`, `title-block`, `calibration` (always present, empty when
- * there is nothing to draw), `bevel-band` after `labels` only when the plan has one,
- * and `fit-up` on a sheet whose template carries its fit-up (square lines, station
- * ordinates, the fit-up block). Numbers are rounded to 0.001 mm (0.00001 in).
+ * `cut`, `labels`, `sides` (WASTE and the kept side, the piece in large print),
+ * `title-block`, `calibration` (always present, empty when there is nothing to
+ * draw), `bevel-band` after `sides` only when the plan has one, and `fit-up` on
+ * a sheet whose template carries its fit-up (square lines, station ordinates,
+ * the fit-up block). Numbers are rounded to 0.001 mm (0.00001 in).
  *
  * @param plan - a plan from `planSheet` of `@girth/sheet` (already checked).
  * @returns the SVG document as a string (UTF-8, with an XML declaration).
@@ -229,6 +235,11 @@ export function planToSvg(plan: SheetPlan): string {
         'g',
         { id: 'labels', class: 'labels', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle', 'font-weight': 'bold' },
         (r.texts.get('label') ?? []).map((t) => textNode(t, frame, w)),
+      ),
+      el(
+        'g',
+        { id: 'sides', class: 'sides', fill: INK.black, stroke: 'none', 'font-family': FONT_FAMILY, 'text-anchor': 'middle', 'font-weight': 'bold' },
+        [...(r.texts.get('side') ?? []), ...(r.texts.get('piece-mark') ?? [])].map((t) => textNode(t, frame, w, { class: t.role })),
       ),
       ...bevelBandGroup(r, frame, w),
       fitUpGroup(r, frame, w),

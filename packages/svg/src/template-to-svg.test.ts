@@ -120,17 +120,20 @@ describe('templateToSvg: groups and what every sheet carries', () => {
   });
 
   test('a station number for every station line, and the template labels', () => {
-    const numbers = elements(byId(root, 'stations'), 'text').map(textOf);
+    const stationTexts = elements(byId(root, 'stations'), 'text');
+    const numbers = stationTexts.filter((t) => t.attributes['data-station'] !== undefined).map(textOf);
     expect(numbers).toEqual(wrap.stationLines.map((s) => String(s.n)));
+    // The quarter lines not already labelled by the template are named beside their numbers.
+    expect(stationTexts.filter((t) => t.attributes['data-station'] === undefined).map(textOf)).toEqual(['SIDE', 'SIDE']);
     expect(elements(byId(root, 'labels'), 'text').map(textOf)).toEqual(['HEEL', 'TOE']);
   });
 
-  test('station lines starting at the same point share one number', () => {
+  test('station lines starting at the same point each keep their own number (no "2/8" that reads as a fraction)', () => {
     const [a, b, c] = wrap.stationLines as [StationLine, StationLine, StationLine];
     const t = { ...wrap, stationLines: [{ ...a, n: 8 }, { ...b, n: 2, from: a.from }, c] };
-    const texts = elements(byId(parseSvg(templateToSvg(t)), 'stations'), 'text');
-    expect(texts.map(textOf)).toEqual(['2/8', String(c.n)]);
-    expect(texts[0]?.attributes['data-station']).toBe('2 8');
+    const texts = elements(byId(parseSvg(templateToSvg(t)), 'stations'), 'text').filter((x) => x.attributes['data-station'] !== undefined);
+    expect(texts.map(textOf)).toEqual(['8', '2', String(c.n)]);
+    expect(texts.map((x) => x.attributes['data-station'])).toEqual(['8', '2', String(c.n)]);
   });
 
   test('without job and piece the sheet leaves blanks to write on', () => {

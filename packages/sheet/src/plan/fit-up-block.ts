@@ -5,15 +5,12 @@
  * carries them (`withFitUp`, worded in the job's unit).
  */
 import type { Point2, Template } from '@girth/unroll';
-import { ASCENT_EM, CAP_HEIGHT_EM, DESCENT_EM, FONT_MM, LINE_EM, TEXT_INSET_EM, TITLE_GAP_MM } from '../style.js';
+import { ASCENT_EM, CAP_HEIGHT_EM, DESCENT_EM, FONT_MM, LINE_EM, MIN_SHEET_WIDTH_MM, TEXT_INSET_EM, TITLE_GAP_MM } from '../style.js';
 import type { Box } from '../internal/box.js';
 import { textLines } from '../internal/text-lines.js';
 import { textWidthMm } from '../internal/text-metrics.js';
-import { wrapWords } from '../internal/wrap-words.js';
+import { wrapToWidth } from '../internal/wrap-width.js';
 import type { SheetText } from '../types.js';
-
-/** Fit-up lines longer than this many characters are broken at spaces (as the title block's). */
-const FIT_UP_LINE_CHARS = 110;
 
 /** The block placed: its lines and the box they cover, template mm. */
 export interface FitUpBlockPlan {
@@ -43,7 +40,8 @@ function line(text: string, x: number, y: number, fontMm: number, bold: boolean)
 
 /**
  * The fit-up block of a template, flush left under `drawing`: a bold
- * `FIT-UP` heading, then each line (cleaned to one line, broken at spaces).
+ * `FIT-UP` heading, then each line (cleaned to one line, broken at spaces to
+ * the drawing's width, as the title block's, at least `MIN_SHEET_WIDTH_MM`).
  *
  * @param drawing - what is drawn so far, template mm.
  * @param textScale - the title block's text scale.
@@ -55,9 +53,10 @@ export function planFitUpBlock(template: Template, drawing: Box, textScale: numb
   const fontMm = FONT_MM.body * textScale;
   const x = drawing.minX + TEXT_INSET_EM * fontMm;
   let y = drawing.minY - TITLE_GAP_MM - ASCENT_EM * fontMm;
+  const widthMm = Math.max(drawing.maxX - drawing.minX, MIN_SHEET_WIDTH_MM) - 2 * TEXT_INSET_EM * fontMm;
   const texts: SheetText[] = [line('FIT-UP', x, y, fontMm, true)];
   for (const w of words) {
-    for (const part of w.length > FIT_UP_LINE_CHARS ? wrapWords(w, FIT_UP_LINE_CHARS) : [w]) {
+    for (const part of wrapToWidth(w, widthMm, fontMm)) {
       y -= LINE_EM * fontMm;
       texts.push(line(part, x, y, fontMm, false));
     }

@@ -1,120 +1,84 @@
 /**
- * Where the station numbers go, decided once for every writer: just past the
- * `from` end of each station line (the square line or girth line end, away
- * from the cut),
- * on the line's own direction, sized so neighbours do not run into each other.
- * Station lines that start at the same point (on a hole template, stations
- * phi and 180° - phi can share a girth) get one number together, e.g. `2/8`.
+ * Where the station numbers go, decided once for every writer. Every station
+ * gets its own number (never two joined, which would read as a fraction), at
+ * one legible size, at the end of its line away from the cut: past the square
+ * line end of a wrap or the seam-side end of a flat pattern, past the hole edge
+ * of a hole. A number steps further out along its line until it is clear of
+ * the cut, the square line and every number or label already placed, so close
+ * stations are set in staggered rows instead of overlapping.
  */
-import type { StationLine } from '@girth/unroll';
-import { STATION_NUMBER_GAP_MM, FONT_MM, CAP_HEIGHT_EM } from '../style.js';
-import { centredText, type CentredText } from '../internal/text-box.js';
+import type { Point2, StationLine, TemplateKind } from '@girth/unroll';
+import { STATION_NUMBER_GAP_MM, FONT_MM, CAP_HEIGHT_EM, ASCENT_EM, DESCENT_EM } from '../style.js';
+import type { CentredText } from '../internal/text-box.js';
 import { textWidthMm } from '../internal/text-metrics.js';
+import type { Box } from '../types.js';
+import type { Obstacles } from './obstacles.js';
+import { placeText, stepsAlong, TEXT_CLEARANCE_MM } from './place-text.js';
 
-/** Smallest station number size, mm: below this it is no longer legible on paper. */
-const MIN_STATION_FONT_MM = 1.2;
-/** Station lines whose `from` ends are closer than this share one number, mm. */
-const SAME_POINT_MM = 0.05;
-
-/** A station number placed: the text (one number, or several joined by `/`) and the stations it names. */
+/** A station number placed: the text and the station it names. */
 export interface StationNumber extends CentredText {
   readonly stations: readonly number[];
 }
 
-/** Distance between two points, mm (a square root: Math.hypot is several times slower in V8). */
-function dist2(a: readonly [number, number], b: readonly [number, number]): number {
-  const dx = a[0] - b[0];
-  const dy = a[1] - b[1];
-  return Math.sqrt(dx * dx + dy * dy);
+/** Most rows tried outward before a number is set at the last one regardless (never reached on a sane sheet). */
+const MAX_ROWS = 4000;
+
+/** Unit vector from `a` to `b`, or `fallback` when they coincide. */
+function unit(a: Point2, b: Point2, fallback: Point2): Point2 {
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const len = Math.sqrt(dx * dx + dy * dy);
+  return len > 1e-9 ? [dx / len, dy / len] : fallback;
 }
 
-interface Group {
-  readonly line: StationLine;
-  readonly ns: number[];
-}
-
-function groupByStart(lines: readonly StationLine[]): Group[] {
-  // Hash the start points on a grid of SAME_POINT_MM cells: a match lies in this
-  // cell or a neighbour, so grouping takes time linear in the number of lines.
-  const groups: Group[] = [];
-  // Cell keys as numbers (cx · 2^26 + cy, exact in a double for any coordinate within 1 km);
-  // a collision of two cells is harmless, since every match is checked by distance.
-  const cells = new Map<number, number[]>();
-  const keyOf = (cx: number, cy: number): number => cx * 67108864 + cy;
-  const cellOf = (v: number): number => Math.floor(v / SAME_POINT_MM);
-  for (const line of lines) {
-    const cx = cellOf(line.from[0]);
-    const cy = cellOf(line.from[1]);
-    let found = -1;
-    for (let dx = -1; dx <= 1; dx++) {
-      for (let dy = -1; dy <= 1; dy++) {
-        const list = cells.get(keyOf(cx + dx, cy + dy));
-        if (list === undefined) continue;
-        for (const gi of list) {
-          const g = groups[gi] as Group;
-          const near = dist2(g.line.from, line.from) < SAME_POINT_MM;
-          // The earliest group within reach, as a first-match search in order would find.
-          if (near && (found < 0 || gi < found)) found = gi;
-        }
-      }
-    }
-    if (found >= 0) {
-      const same = groups[found] as Group;
-      if (!same.ns.includes(line.n)) same.ns.push(line.n);
-    } else {
-      const key = keyOf(cx, cy);
-      const list = cells.get(key);
-      if (list) list.push(groups.length);
-      else cells.set(key, [groups.length]);
-      groups.push({ line, ns: [line.n] });
-    }
-  }
-  for (const g of groups) g.ns.sort((a, b) => a - b);
-  return groups;
-}
-
-/** Smallest distance between two start points: sorted by x, each compared only with those less than the best distance away in x. */
-function closestStartsMm(groups: readonly Group[]): number {
-  const pts = groups.map((g) => g.line.from).sort((a, b) => a[0] - b[0]);
-  let best = Infinity;
-  for (let i = 0; i < pts.length; i++) {
-    const a = pts[i] as readonly [number, number];
-    for (let j = i + 1; j < pts.length; j++) {
-      const b = pts[j] as readonly [number, number];
-      if (b[0] - a[0] >= best) break;
-      const d = dist2(a, b);
-      if (d < best) best = d;
-    }
-  }
-  return best;
-}
-
-function numberFontMm(groups: readonly Group[]): number {
-  const minGap = closestStartsMm(groups);
-  const widestEm = Math.max(1, ...groups.map((g) => textWidthMm(g.ns.join('/'), 1)));
-  // Keep a fifth of the gap clear between neighbouring numbers.
-  const fit = (0.8 * minGap) / widestEm;
-  return Math.min(FONT_MM.stationNumber, Math.max(MIN_STATION_FONT_MM, fit));
+/** Station numbers and the names of the quarter lines, placed. */
+export interface StationTexts {
+  readonly numbers: readonly StationNumber[];
+  /** A quarter line's name (bold), just past its number. */
+  readonly names: readonly CentredText[];
 }
 
 /**
- * Placements of the station numbers, template mm: one per distinct start point.
+ * Placements of the station numbers, template mm: one per station line, each
+ * registered in `obstacles` as it is placed; a line named in `names` (a quarter
+ * line) has its name set just past its number.
  *
- * @example planStationNumbers(template.stationLines)[0].lines // ['1']
+ * @param kind - the template's kind: a hole numbers the hole-edge (`to`) end, others the `from` end.
+ * @param drawing - the box of the template's lines: a line of no length points away from its middle.
+ * @example planStationNumbers(template.stationLines, 'wrap', box, obstacles, new Map([[1, 'HEEL']])).numbers[0].lines // ['1']
  */
-export function planStationNumbers(lines: readonly StationLine[]): StationNumber[] {
-  if (lines.length === 0) return [];
-  const groups = groupByStart(lines);
-  const fontMm = numberFontMm(groups);
-  return groups.map(({ line, ns }) => {
-    const text = ns.join('/');
-    const dx = line.from[0] - line.to[0];
-    const dy = line.from[1] - line.to[1];
-    const len = Math.sqrt(dx * dx + dy * dy);
-    // A line of no length (a station with no cutback) takes its number below it.
-    const [ux, uy] = len > 1e-9 ? [dx / len, dy / len] : [0, -1];
-    const halfAlong = (Math.abs(ux) * textWidthMm(text, fontMm)) / 2 + (Math.abs(uy) * CAP_HEIGHT_EM * fontMm) / 2;
-    const reach = STATION_NUMBER_GAP_MM + halfAlong;
-    return { ...centredText([text], [line.from[0] + ux * reach, line.from[1] + uy * reach], fontMm), stations: ns };
-  });
+export function planStationNumbers(
+  lines: readonly StationLine[],
+  kind: TemplateKind,
+  drawing: Box,
+  obstacles: Obstacles,
+  names: ReadonlyMap<number, string> = new Map(),
+): StationTexts {
+  const fontMm = FONT_MM.stationNumber;
+  const mid: Point2 = [(drawing.minX + drawing.maxX) / 2, (drawing.minY + drawing.maxY) / 2];
+  const out: StationNumber[] = [];
+  const named: CentredText[] = [];
+  for (const line of lines) {
+    const text = String(line.n);
+    const anchor = kind === 'hole' ? line.to : line.from;
+    const other = kind === 'hole' ? line.from : line.to;
+    const away = unit(mid, anchor, [0, -1]);
+    const u = unit(other, anchor, kind === 'wrap' ? [0, -1] : away);
+    const w = textWidthMm(text, fontMm);
+    const h = (ASCENT_EM + DESCENT_EM) * fontMm;
+    const halfAlong = (Math.abs(u[0]) * w) / 2 + (Math.abs(u[1]) * CAP_HEIGHT_EM * fontMm) / 2;
+    const step = Math.abs(u[0]) * w + Math.abs(u[1]) * h + TEXT_CLEARANCE_MM;
+    const candidates = stepsAlong(anchor, u, STATION_NUMBER_GAP_MM, halfAlong, Math.max(step, 1), MAX_ROWS);
+    const placed = placeText(obstacles, [text], fontMm, false, candidates, true);
+    if (placed) out.push({ ...placed, stations: [line.n] });
+    const name = names.get(line.n);
+    if (name !== undefined) {
+      const nw = textWidthMm(name, fontMm, true);
+      const nHalf = (Math.abs(u[0]) * nw) / 2 + (Math.abs(u[1]) * CAP_HEIGHT_EM * fontMm) / 2;
+      const nStep = Math.abs(u[0]) * nw + Math.abs(u[1]) * h + TEXT_CLEARANCE_MM;
+      const t = placeText(obstacles, [name], fontMm, true, stepsAlong(anchor, u, STATION_NUMBER_GAP_MM, nHalf, Math.max(nStep, 1), MAX_ROWS), true);
+      if (t) named.push(t);
+    }
+  }
+  return { numbers: out, names: named };
 }

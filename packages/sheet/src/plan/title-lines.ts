@@ -8,7 +8,7 @@ import type { ResolvedSheetOptions } from '../types.js';
 import { FONT_MM } from '../style.js';
 import { textLines } from '../internal/text-lines.js';
 import { PRINT_NOTE } from '../print-note.js';
-import { wrapWords } from '../internal/wrap-words.js';
+import { wrapToWidth } from '../internal/wrap-width.js';
 
 /** One line of the title block. */
 export interface TitleLine {
@@ -19,8 +19,6 @@ export interface TitleLine {
   readonly role: 'job' | 'title' | 'note' | 'placement' | 'print';
 }
 
-/** Title block lines longer than this many characters are broken at spaces into several lines. */
-export const TITLE_LINE_CHARS = 110;
 
 /** Blank left for writing by hand when no job or piece was given. */
 const BLANK = '________________';
@@ -58,11 +56,13 @@ function placementLine(template: Template, units: 'mm' | 'in'): string {
 }
 
 /**
- * The title block's lines for a template and options (user text cleaned to one line each).
+ * The title block's lines for a template and options (user text cleaned to one
+ * line each), each broken at spaces into lines no wider than `widthMm`.
  *
- * @example planTitleLines(template, resolveSheetOptions({ job: 'J-1' }))[0].text // 'Job: J-1 · Piece: ________________'
+ * @param widthMm - the width the lines may take, mm (the drawing's width, or the sheet's least width).
+ * @example planTitleLines(template, resolveSheetOptions({ job: 'J-1' }), 180)[0].text // 'Job: J-1 · Piece: ________________'
  */
-export function planTitleLines(template: Template, options: ResolvedSheetOptions): TitleLine[] {
+export function planTitleLines(template: Template, options: ResolvedSheetOptions, widthMm: number): TitleLine[] {
   const job = options.job === undefined ? BLANK : oneLine(options.job);
   const piece = options.piece === undefined ? BLANK : oneLine(options.piece);
   const k = options.textScale;
@@ -78,10 +78,9 @@ export function planTitleLines(template: Template, options: ResolvedSheetOptions
     bold: false,
     role: 'print',
   });
-  // Long lines are broken at spaces so neither the paper nor a DXF text runs on (a blank line stays one).
-  // The print line is the sheet's own fixed text (its length bounded by the template id): kept whole.
+  // Every line is broken to the width, so the drawing, not a long note, sets the sheet's width (a blank line stays one).
   return lines.flatMap((l) => {
-    const parts = l.role === 'print' || l.text.length <= TITLE_LINE_CHARS ? [] : wrapWords(l.text, TITLE_LINE_CHARS);
+    const parts = wrapToWidth(l.text, widthMm, l.fontMm, l.bold);
     return parts.length <= 1 ? [l] : parts.map((text) => ({ ...l, text }));
   });
 }

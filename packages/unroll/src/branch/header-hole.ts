@@ -91,7 +91,8 @@ export function developHeaderHole(input: HeaderHoleInput): HoleTemplate {
   const labels: TemplateLabel[] = [
     { text: 'HEEL', at: outside(flatten(cut.stations[0]!)), heightMm: h },
     ...(toe === undefined ? [] : [{ text: 'TOE', at: outside(flatten(toe)), heightMm: h }]),
-    { text: 'TOP LINE', at: [h / 2, maxY + margin], heightMm: h },
+    // Beside the top line's far end, clear of the TOE under it: side by side they would read as one phrase, stacked as a fraction.
+    { text: 'TOP LINE', at: [6 * h, maxY + margin + 2 * h], heightMm: h },
   ];
 
   return {

@@ -97,7 +97,8 @@ export function developTwoCutWrap(input: DevelopTwoCutWrapInput): WrapTemplate {
 
   const labels: TemplateLabel[] = [
     ...input.labels.map((l): TemplateLabel => ({ text: l.text, at: [girthAt(l.phiRad), nearLongMm], heightMm: WRAP_LABEL_HEIGHT_MM })),
-    { text: 'CENTRE', at: [stretchOutMm / 2, nearLongMm + 1.5 * WRAP_LABEL_HEIGHT_MM], heightMm: WRAP_LABEL_HEIGHT_MM },
+    // On the side line (90°), a quarter away from the piece's own labels, so no two words stand stacked.
+    { text: 'CENTRE', at: [stretchOutMm / 4, nearLongMm + 1.5 * WRAP_LABEL_HEIGHT_MM], heightMm: WRAP_LABEL_HEIGHT_MM },
   ];
 
   return {
