@@ -111,7 +111,18 @@ function readDxf(dxf: string, perUnit: number) {
   const centred: PlacedText[] = [];
   const left: PlacedText[] = [];
   const lines: Seg[] = [];
+  const cuts: Seg[] = [];
   for (const e of parsed.entities) {
+    if ((e.type === 'LWPOLYLINE' || e.type === 'POLYLINE') && e.layer === 'CUT') {
+      const v = (e as unknown as { vertices: { x: number; y: number }[]; shape?: boolean }).vertices;
+      const n = v.length;
+      const closed = (e as unknown as { shape?: boolean }).shape === true;
+      for (let i = 0; i + 1 < n + (closed ? 1 : 0); i++) {
+        const a = v[i]!;
+        const b = v[(i + 1) % n]!;
+        cuts.push([a.x * perUnit, a.y * perUnit, b.x * perUnit, b.y * perUnit]);
+      }
+    }
     if (e.type === 'TEXT') {
       const t = e as unknown as DxfText;
       const at = (t.halign ?? 0) > 0 && t.endPoint ? t.endPoint : t.startPoint;
@@ -123,7 +134,7 @@ function readDxf(dxf: string, perUnit: number) {
       lines.push([v[0]!.x * perUnit, v[0]!.y * perUnit, v[1]!.x * perUnit, v[1]!.y * perUnit]);
     }
   }
-  return { centred, left, lines };
+  return { centred, left, lines, cuts };
 }
 
 const byPlace = (a: PlacedText, b: PlacedText) => a.x - b.x || a.y - b.y;
@@ -140,6 +151,20 @@ function expectSameTexts(svg: readonly PlacedText[], dxf: readonly PlacedText[],
     expect(Math.abs(a.y - b.y), `${what} '${a.text}' y`).toBeLessThanOrEqual(TOL_MM);
     expect(Math.abs(a.capMm - b.capMm), `${what} '${a.text}' cap height`).toBeLessThanOrEqual(TOL_MM);
   });
+}
+
+/** Distance (mm) from point (x, y) to segment t. */
+function toSegment(t: Seg, x: number, y: number): number {
+  const dx = t[2] - t[0];
+  const dy = t[3] - t[1];
+  const len2 = dx * dx + dy * dy;
+  const u = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((x - t[0]) * dx + (y - t[1]) * dy) / len2));
+  return Math.hypot(t[0] + u * dx - x, t[1] + u * dy - y);
+}
+
+/** A mark line lying along one CUT segment: the DXF leaves it to CUT (a cutting table would cut or etch it twice). */
+function onCut(cuts: readonly Seg[], s: Seg): boolean {
+  return cuts.some((t) => toSegment(t, s[0], s[1]) <= TOL_MM && toSegment(t, s[2], s[3]) <= TOL_MM);
 }
 
 function hasSegment(list: readonly Seg[], s: Seg): boolean {
@@ -168,7 +193,7 @@ describe('SVG and DXF of one template agree (both written from one sheet plan)',
         expect(svg.centred.length, `${t.id}: something to compare`).toBeGreaterThan(0);
         expectSameTexts(svg.centred, dxf.centred, `${t.id} ${units} numbers and labels`, true);
         expectSameTexts(svg.left, dxf.left, `${t.id} ${units} title block`, false);
-        for (const s of svg.lines) expect(hasSegment(dxf.lines, s), `${t.id} ${units} line ${s.map((v) => v.toFixed(3)).join(' ')}`).toBe(true);
+        for (const s of svg.lines) expect(hasSegment(dxf.lines, s) || onCut(dxf.cuts, s), `${t.id} ${units} line ${s.map((v) => v.toFixed(3)).join(' ')}`).toBe(true);
       }
     });
   }
