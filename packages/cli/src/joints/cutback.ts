@@ -3,7 +3,7 @@
  */
 import { JOINT_ANGLE_DEG, rangeText } from '@girth/pipes';
 import type { PlaneCutLayout } from '@girth/unroll';
-import { optionalChoice, requireNumberOption, requireOption, stringOption } from '../args.js';
+import { optionalChoice, requireNumberOption, requireOption, stringOption } from '../option-values.js';
 import { reportLength } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe } from './read-inputs.js';

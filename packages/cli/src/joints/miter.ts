@@ -3,7 +3,7 @@
  */
 import { BEND_DEG, MITER_WELDS, rangeText } from '@girth/pipes';
 import type { MiterLayout } from '@girth/unroll';
-import { numberOption, optionalChoice, requireNumberOption, requireOption, stringOption } from '../args.js';
+import { numberOption, optionalChoice, requireNumberOption, requireOption, stringOption } from '../option-values.js';
 import { reportAngle, reportLength, reportLengthAtLeast } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe } from './read-inputs.js';

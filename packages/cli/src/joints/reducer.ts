@@ -3,7 +3,7 @@
  */
 import { CONE_APEX_ANGLE_DEG, GirthError, rangeText } from '@girth/pipes';
 import type { ConeLayout } from '@girth/unroll';
-import { numberOption, optionalChoice, requireOption, stringOption } from '../args.js';
+import { numberOption, optionalChoice, requireOption, stringOption } from '../option-values.js';
 import { reportAngle, reportLength, reportLengthAtLeast } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipeOrDiameter } from './read-inputs.js';
