@@ -188,7 +188,7 @@ function densify(points: readonly Point2[], kinks: ReadonlySet<number>): Point2[
  * neighbouring samples) and held to the same tolerance; a fitted arc may end
  * at such an estimated point.
  *
- * @param points samples along the exact curve, in order (any unit; at least 2).
+ * @param samples samples along the exact curve, in order (any unit; at least 2).
  * @param tolerance largest allowed distance of a sample from its fitted arc, same unit, > 0.
  * @returns vertices with DXF bulges and the largest deviation found.
  * @example fitArcs(quarterCircleSamples, 0.025).vertices.length // 2: one arc
