@@ -57,7 +57,7 @@ A job file:
 Keys of a piece are those of its command's options in camelCase (radiusNps,
 includedAngle, branchSurface); lengths are text ("2 1/2\\"", "63.5mm") or numbers
 in the job's unit. Optional job keys: decimal, fraction (8|16|32),
-dxfVersion ("2007"|"r12"), outputs (["svg","dxf","csv"]).
+dxfVersion ("2007"|"r12"), dxfCurves ("lines"|"arcs"), outputs (["svg","dxf","csv"]).
 
 Printing the packet (with --packet; lengths in the job's unit):
 ${PRINT_OPTIONS_HELP}

@@ -3,7 +3,7 @@
  * tables, all planned in memory before anything is written.
  */
 import { basename, dirname, extname, join } from 'node:path';
-import { templateToDxf, type DxfTextMode, type DxfVersion } from '@girth/dxf';
+import { templateToDxf, type DxfCurveMode, type DxfTextMode, type DxfVersion } from '@girth/dxf';
 import type { LengthUnit } from '@girth/pipes';
 import { templateToSvg } from '@girth/svg';
 import { stationTableCsv, type TableLengthFormat } from '@girth/table';
@@ -30,6 +30,8 @@ export interface OutputStyle {
   readonly dxfVersion: DxfVersion;
   /** DXF text as TEXT, left out or single strokes on MARK; default TEXT. */
   readonly dxfText?: DxfTextMode;
+  /** DXF cut lines as chords (default) or fitted arcs. */
+  readonly dxfCurves?: DxfCurveMode;
   readonly job?: string;
   readonly piece?: string;
 }
@@ -68,7 +70,7 @@ export function planOutputs(result: LayoutResult, request: OutputRequest, style:
       files.push({
         option: '--dxf',
         path: templatePath(request.dxf, template, count),
-        content: templateToDxf(template, { units: style.units, version: style.dxfVersion, ...(style.dxfText === undefined ? {} : { text: style.dxfText }), ...labels }),
+        content: templateToDxf(template, { units: style.units, version: style.dxfVersion, ...(style.dxfText === undefined ? {} : { text: style.dxfText }), ...(style.dxfCurves === undefined ? {} : { curves: style.dxfCurves }), ...labels }),
       });
     }
   }

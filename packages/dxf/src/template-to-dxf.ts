@@ -4,7 +4,10 @@
 import { planSheet, type SheetPlan } from '@girth/sheet';
 import { closeTemplate, onDevelopmentSurface, type Template } from '@girth/unroll';
 import { planToSheet } from './internal/build-sheet.js';
+import { fitTemplateArcs } from './internal/fit-template.js';
 import { DEFAULT_TEXT_HEIGHT_MM, resolveDxfOptions } from './internal/options.js';
+import { MM_PER_INCH } from '@girth/pipes';
+import { ARC_SAMPLE_SHARE } from './tolerances.js';
 import { writeAc1021 } from './internal/write-ac1021.js';
 import { writeR12 } from './internal/write-r12.js';
 import type { DxfOptions, DxfWriteOptions } from './types.js';
@@ -37,6 +40,21 @@ export function planToDxf(plan: SheetPlan, options?: DxfWriteOptions): string {
   return o.version === 'R12' ? writeR12(sheet) : writeAc1021(sheet);
 }
 
+/** A length for the notes, the output unit first. */
+function noteLength(mm: number, units: 'mm' | 'in'): string {
+  return units === 'in' ? `${(mm / MM_PER_INCH).toFixed(4)} in (${mm.toFixed(3)} mm)` : `${mm.toFixed(3)} mm`;
+}
+
+/** The template with arc-fitted cut lines and a note saying so and how close they are. */
+function withArcs(template: Template, toleranceMm: number, units: 'mm' | 'in'): Template {
+  const fit = fitTemplateArcs(template, toleranceMm * ARC_SAMPLE_SHARE);
+  if (fit.fittedCount === fit.chordCount) return fit.template;
+  const note =
+    `Cut lines fitted with arcs: ${fit.fittedCount} arcs and lines for ${fit.chordCount} chords; ` +
+    `largest distance from the sampled cut ${noteLength(fit.maxDeviationMm, units)}, limit ${noteLength(toleranceMm, units)} from the true cut.`;
+  return { ...fit.template, notes: [...fit.template.notes, note] };
+}
+
 /**
  * A template as a DXF file for a cutting table or CAD, full size: its sheet
  * planned by `planSheet` (the same plan the SVG writes), written by {@link planToDxf}.
@@ -49,7 +67,9 @@ export function planToDxf(plan: SheetPlan, options?: DxfWriteOptions): string {
  *   for a cutting table: `closedParts` (every part one closed contour, `stubMm`
  *   the stub of a single-cut wrap), `surface: 'mid'` with `plateThicknessMm`
  *   (developed on the mid-thickness of a rolled plate; the sheet's notes say
- *   so), `text` (`'text'`, `'none'`, or `'stroke'` single-stroke lines on MARK).
+ *   so), `text` (`'text'`, `'none'`, or `'stroke'` single-stroke lines on MARK),
+ *   `curves: 'arcs'` (cut lines fitted with arcs within `arcToleranceMm`, default
+ *   0.05 mm, of the true cut; the notes give the count and the largest deviation).
  * @returns the whole DXF file as a string, ending in `EOF` and a line break.
  *   Nothing is written anywhere; the caller saves it.
  * @throws GirthError `NOT_A_NUMBER` / `NOT_FINITE` for a NaN or infinite
@@ -68,7 +88,8 @@ export function templateToDxf(template: Template, options?: DxfOptions): string 
   const o = resolveDxfOptions(options);
   const developed =
     options?.surface === undefined ? template : onDevelopmentSurface(template, { surface: options.surface, ...(options.plateThicknessMm === undefined ? {} : { plateThicknessMm: options.plateThicknessMm }) });
-  const part = options?.closedParts === true ? closeTemplate(developed, options.stubMm === undefined ? {} : { stubMm: options.stubMm }) : developed;
+  const closed = options?.closedParts === true ? closeTemplate(developed, options.stubMm === undefined ? {} : { stubMm: options.stubMm }) : developed;
+  const part = o.curves === 'arcs' ? withArcs(closed, o.arcToleranceMm, o.units) : closed;
   const plan = planSheet(part, {
     sheetUnits: o.units,
     ...(o.job === '' ? {} : { job: o.job }),

@@ -38,3 +38,17 @@ export const MAX_COORD_MM = 1_000_000;
 
 /** Longest text written in one TEXT entity (characters); R12 readers stop at 255. */
 export const MAX_TEXT_CHARS = 250;
+
+/**
+ * Default largest distance of a fitted arc from the exact cut, mm: the
+ * templates' own chord tolerance (0.05 mm), so fitting arcs loses nothing the
+ * chords kept.
+ */
+export const ARC_TOLERANCE_MM = 0.05;
+
+/**
+ * Share of the arc tolerance a fitted arc may use against the samples and the
+ * curve points estimated between them; the rest covers the estimate's own
+ * error. 0.8: checked against the independent oracle (test/acceptance/arc-fit-oracle).
+ */
+export const ARC_SAMPLE_SHARE = 0.8;

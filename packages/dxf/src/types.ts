@@ -19,6 +19,14 @@ export type DxfUnits = 'mm' | 'in';
  */
 export type DxfTextMode = 'text' | 'none' | 'stroke';
 
+/**
+ * How the DXF carries the sampled cut lines: `lines` (straight chords, as
+ * sampled: every controller reads them) or `arcs` (fitted with circular arcs
+ * within the arc tolerance: bulges of LWPOLYLINE in AC1021, of POLYLINE/VERTEX
+ * in R12; a few smooth arcs instead of hundreds of chords).
+ */
+export type DxfCurveMode = 'lines' | 'arcs';
+
 /** The three layers Girth writes, by role. */
 export type DxfLayerRole = 'cut' | 'mark' | 'text';
 
@@ -65,6 +73,13 @@ export interface DxfOptions {
   readonly plateThicknessMm?: number;
   /** Text as TEXT entities (`'text'`, default), left out (`'none`') or single-stroke lines on MARK (`'stroke'`). */
   readonly text?: DxfTextMode;
+  /** Cut lines as sampled chords (`'lines'`, default) or fitted arcs (`'arcs'`); the sheet's notes say when arcs were fitted and how close. */
+  readonly curves?: DxfCurveMode;
+  /**
+   * With `curves: 'arcs'`: the largest distance a fitted arc may stray from the exact cut, mm, (0, 1];
+   * default `ARC_TOLERANCE_MM` (0.05 mm).
+   */
+  readonly arcToleranceMm?: number;
 }
 
 /** Options of {@link planToDxf}: how to write, not what (the plan already holds the text). */

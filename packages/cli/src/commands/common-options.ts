@@ -2,7 +2,7 @@
  * Options every joint command takes: units, stations, outputs, labels.
  */
 import { DEFAULT_STATIONS, GirthError, parseLength, rangeText, requireWithin, STATIONS, type LengthUnit } from '@girth/pipes';
-import type { DxfTextMode, DxfVersion } from '@girth/dxf';
+import type { DxfCurveMode, DxfTextMode, DxfVersion } from '@girth/dxf';
 import type { CuttingSettings } from '../cutting-parts.js';
 import type { TableLengthFormat } from '@girth/table';
 import { choiceOption, numberOption, optionalChoice, stringOption, type OptionSpec, type ParsedArgs } from '../args.js';
@@ -27,6 +27,7 @@ export const COMMON_OPTIONS: OptionSpec = {
   'develop-on': { type: 'string' },
   'rolled-plate': { type: 'string' },
   'dxf-text': { type: 'string' },
+  'dxf-curves': { type: 'string' },
   pdf: { type: 'string' },
   ...PRINT_OPTIONS,
   json: { type: 'boolean' },
@@ -59,6 +60,9 @@ For a cutting table (SVG, DXF, CSV and JSON all show the same part):
                          the pipe (default each pipe's wall)
   --dxf-text text|none|stroke  DXF text as text, left out, or single-stroke
                          lines on MARK for a table that etches (with --dxf)
+  --dxf-curves lines|arcs  DXF cut lines as short straight chords (default; every
+                         table reads them) or fitted arcs within 0.05 mm of the
+                         true cut (fewer, smoother moves; with --dxf)
   --pdf FILE             every sheet at true size in one PDF, tiled on office paper
                          with an assembly map, or one page per roll width
 ${PRINT_OPTIONS_HELP}
@@ -107,6 +111,11 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
     throw new GirthError('BAD_OPTION', '--dxf-text', '--dxf-text: no DXF is written; give --dxf FILE too, or leave --dxf-text out');
   }
   const dxfText: DxfTextMode = dxfTextChoice ?? 'text';
+  const dxfCurvesChoice = optionalChoice(args, 'dxf-curves', ['lines', 'arcs'] as const);
+  if (dxfCurvesChoice !== undefined && stringOption(args, 'dxf') === undefined) {
+    throw new GirthError('BAD_OPTION', '--dxf-curves', '--dxf-curves: no DXF is written; give --dxf FILE too, or leave --dxf-curves out');
+  }
+  const dxfCurves: DxfCurveMode = dxfCurvesChoice ?? 'lines';
   const print = readPrintOptions(args, units, request.pdf !== undefined, '--pdf FILE');
   return {
     cutting,
@@ -117,7 +126,7 @@ export function readCommonOptions(args: ParsedArgs): CommonSettings {
       fieldName: (name) => `--${kebab(name)}`,
       describe: { units, lengthFormat: tableFormat, fraction },
     },
-    style: { units, tableFormat, fraction, dxfVersion, dxfText, ...(job !== undefined ? { job } : {}), ...(piece !== undefined ? { piece } : {}) },
+    style: { units, tableFormat, fraction, dxfVersion, dxfText, dxfCurves, ...(job !== undefined ? { job } : {}), ...(piece !== undefined ? { piece } : {}) },
     request,
     ...(print !== undefined ? { print } : {}),
     json: args.values.json === true,

@@ -55,6 +55,7 @@ export function refuseIdleJobKeys(job: Job): void {
   if (job.stub !== undefined && job.closedParts !== true) idle('stub', 'the stub length is for closed parts; add "closedParts": true or leave stub out');
   if (job.rolledPlate !== undefined && job.developOn !== 'mid') idle('rolledPlate', 'the plate thickness is for "developOn": "mid"; add it or leave rolledPlate out');
   if (job.dxfText !== undefined && job.outputs !== undefined && !job.outputs.includes('dxf')) idle('dxfText', 'no DXF is written ("outputs" leaves out "dxf"); add "dxf" to outputs or leave dxfText out');
+  if (job.dxfCurves !== undefined && job.outputs !== undefined && !job.outputs.includes('dxf')) idle('dxfCurves', 'no DXF is written ("outputs" leaves out "dxf"); add "dxf" to outputs or leave dxfCurves out');
   if (job.dxfVersion !== undefined && job.outputs !== undefined && !job.outputs.includes('dxf')) idle('dxfVersion', 'no DXF is written ("outputs" leaves out "dxf"); add "dxf" to outputs or leave dxfVersion out');
 }
 
@@ -131,7 +132,7 @@ export function* planPieces(job: Job, outDir: string, timing?: JobTiming): Gener
     const t0 = timing === undefined ? 0 : performance.now();
     const result = prepareForCutting(layoutJoint(piece, ctx), cutting, job.units, ctx.describe);
     const t1 = timing === undefined ? 0 : performance.now();
-    const style: OutputStyle = { units: job.units, tableFormat, fraction, dxfVersion, ...(job.dxfText === undefined ? {} : { dxfText: job.dxfText }), job: job.job, piece: piece.piece };
+    const style: OutputStyle = { units: job.units, tableFormat, fraction, dxfVersion, ...(job.dxfText === undefined ? {} : { dxfText: job.dxfText }), ...(job.dxfCurves === undefined ? {} : { dxfCurves: job.dxfCurves }), job: job.job, piece: piece.piece };
     const base = join(outDir, stem);
     const files = planOutputs(
       result,

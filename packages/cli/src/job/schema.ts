@@ -69,6 +69,8 @@ const JOB_KEYS = {
   rolledPlate: kit.length().optional(),
   /** DXF text: `text`, `none` or `stroke` (see `--dxf-text`). */
   dxfText: z.enum(['text', 'none', 'stroke']).optional(),
+  /** DXF cut lines: `lines` or `arcs` (see `--dxf-curves`). */
+  dxfCurves: z.enum(['lines', 'arcs']).optional(),
   pieces: z.array(piece).min(1),
 };
 const job = z.strictObject(JOB_KEYS);
@@ -90,6 +92,7 @@ export interface Job {
   readonly developOn?: 'od' | 'mid';
   readonly rolledPlate?: string | number;
   readonly dxfText?: 'text' | 'none' | 'stroke';
+  readonly dxfCurves?: 'lines' | 'arcs';
   readonly pieces: readonly JobPiece[];
 }
 

@@ -3,8 +3,8 @@
  */
 import { GirthError, requireInRange } from '@girth/pipes';
 import { CAP_HEIGHT_EM, FONT_MM } from '@girth/sheet';
-import { JOIN_EPS_MM } from '../tolerances.js';
-import type { DxfOptions, DxfTextMode, DxfUnits, DxfVersion } from '../types.js';
+import { ARC_TOLERANCE_MM, JOIN_EPS_MM } from '../tolerances.js';
+import type { DxfCurveMode, DxfOptions, DxfTextMode, DxfUnits, DxfVersion } from '../types.js';
 
 /** Cap height of the title line when `textHeightMm` is not given, mm: the sheet plan's, as on the SVG. */
 export const DEFAULT_TEXT_HEIGHT_MM = FONT_MM.title * CAP_HEIGHT_EM;
@@ -19,6 +19,8 @@ export interface ResolvedDxfOptions {
   readonly stationNumbers: boolean;
   readonly joinEpsMm: number;
   readonly text: DxfTextMode;
+  readonly curves: DxfCurveMode;
+  readonly arcToleranceMm: number;
 }
 
 function optionalString(value: unknown, field: string): string {
@@ -54,8 +56,14 @@ export function resolveDxfOptions(options: DxfOptions | undefined): ResolvedDxfO
   if (text !== 'text' && text !== 'none' && text !== 'stroke') {
     throw new GirthError('BAD_CHOICE', 'options.text', `options.text: must be 'text', 'none' or 'stroke', got '${String(text)}'`, text);
   }
+  const curves = o.curves ?? 'lines';
+  if (curves !== 'lines' && curves !== 'arcs') {
+    throw new GirthError('BAD_CHOICE', 'options.curves', `options.curves: must be 'lines' or 'arcs', got '${String(curves)}'`, curves);
+  }
   return {
     text,
+    curves,
+    arcToleranceMm: requireInRange(o.arcToleranceMm ?? ARC_TOLERANCE_MM, 'options.arcToleranceMm', 0, 1, { minOpen: true, unit: 'mm' }),
     units,
     version,
     job: optionalString(o.job, 'options.job'),
