@@ -94,6 +94,10 @@ export type { WeldEndBevel } from './weld/weld-end-bevel.js';
 export { weldPrepWarnings } from './weld/weld-warnings.js';
 export type { WeldPrepWarningCode, WeldPrepWarningOptions, WeldPrepWarningStation } from './weld/weld-warnings.js';
 
+// An elbow body (torus) as a host.
+export { torusOps, torusLocal, torusPoint, torusTapePosition } from './surfaces/torus.js';
+export type { TorusSurface, TorusLocalPoint, TorusTapePosition } from './surfaces/torus.js';
+
 // Dished heads as hosts, and the nozzle joint.
 export { hemisphericalHeadOps } from './surfaces/hemispherical-head.js';
 export type { HemisphericalHeadSurface } from './surfaces/hemispherical-head.js';
