@@ -77,7 +77,7 @@ lengths over the elbow from the inlet end's extrados, with the method's error bo
 
 Examples:
   girth trunnion --elbow "NPS 12 STD" --trunnion "NPS 8 STD" --along 45
-  girth trunnion --elbow "NPS 10 STD" --radius short --trunnion "NPS 6 STD" --along 60 --direction outlet --svg t2.svg
+  girth trunnion --elbow "NPS 10 STD" --radius short --trunnion "NPS 6 STD" --along 30 --direction outlet --svg t2.svg
   girth trunnion --units mm --elbow "DN 300 x 9.5" --radius 600 --bend 60 --trunnion "DN 150 x 7.1" --around 30 --json`,
   fieldNames: { gapMm: 'gap', fit: 'fit', direction: 'direction', branch: 'trunnion', elbow: 'elbow' },
   fromOptions: (args) => ({

@@ -130,7 +130,7 @@ function checkOnBend(bundle: GeneratorBundle, host: TorusSurface, bendDeg: numbe
   for (let i = 0; i < CHECK_GENERATORS; i++) {
     const hit = hitGenerator(bundle, host, (2 * Math.PI * i) / CHECK_GENERATORS);
     if (hit === undefined) {
-      throw new GirthError('BRANCH_TOO_LARGE', 'branch', `branch: the ${branchLabel} trunnion hangs over the side of the ${elbowLabel} as placed; choose a smaller trunnion or place it nearer the extrados or intrados`, undefined);
+      throw new GirthError('BRANCH_TOO_LARGE', 'branch', `branch: the ${branchLabel} trunnion reaches past the ${elbowLabel} as placed (some of its lines miss the elbow); choose a smaller trunnion, a direction nearer square to the elbow, or another place`, undefined);
     }
     const b = torusLocal(host, hit.point).bendRad / DEG;
     lo = Math.min(lo, b);
