@@ -47,10 +47,10 @@ function torusF(R: number, r: number): (p: Vec3) => number {
 
 function gradient(f: (p: Vec3) => number, p: Vec3, h: number): Vec3 {
   const g = [0, 1, 2].map((i) => {
-    const a = [...p] as [number, number, number];
-    const b = [...p] as [number, number, number];
-    a[i] += h;
-    b[i] -= h;
+    const a: [number, number, number] = [p[0], p[1], p[2]];
+    const b: [number, number, number] = [p[0], p[1], p[2]];
+    a[i] = p[i]! + h;
+    b[i] = p[i]! - h;
     return (f(a) - f(b)) / (2 * h);
   });
   const n = Math.hypot(g[0]!, g[1]!, g[2]!);

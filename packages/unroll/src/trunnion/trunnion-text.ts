@@ -57,7 +57,7 @@ export function elbowHoleText(g: TrunnionGeometry, alongBoundMm: number): Return
       ...jointNotes(g),
       factLine`An elbow does not roll out flat, so the hole is given two ways. By square: the outline is the hole seen along the trunnion axis (the trunnion ${face}); set it out on a plane square to the trunnion axis through the hole's highest point, then carry each station down parallel to the axis by its drop.`,
       textLine(
-        "By tape, from the inlet end's extrados (where the inlet weld line crosses the outside of the bend): around is the length around the inlet end's circle from the extrados, positive toward the side named +; " +
+        "By tape, from the inlet end's extrados (where the inlet weld line crosses the outside of the bend): around is the length around the inlet end's circle from the extrados, positive upward with the elbow lying flat and turning left from the inlet end (negative downward; the intrados is half the girth either way); " +
           'along is the length along the bend on the line that keeps that place around the pipe (a line parallel to the extrados), from the inlet end. ' +
           'A tape held around the end circle reads around exactly; scribe the parallel line and hold the tape on it for along.',
       ),
