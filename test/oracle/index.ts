@@ -7,3 +7,4 @@ export * from './plane-cut-oracle.js';
 export * from './miter-oracle.js';
 export * from './dihedral-oracle.js';
 export * from './head-oracle.js';
+export * from './elbow-oracle.js';

@@ -17,7 +17,7 @@ import { planJob } from './job/run-job.js';
 import { parseJob } from './job/schema.js';
 
 const FIXTURES = fileURLToPath(new URL('../../../fixtures', import.meta.url));
-const JOINTS = ['branch', 'miter', 'cutback', 'reducer', 'nozzle'] as const;
+const JOINTS = ['branch', 'miter', 'cutback', 'reducer', 'nozzle', 'trunnion'] as const;
 const UPDATE = process.env.UPDATE_GOLDEN === '1';
 
 /** The contract of every piece of a job file, as the golden holds it. */
@@ -30,7 +30,7 @@ function jobResultText(jobPath: string): { text: string; results: readonly Resul
 }
 
 /** Which pipe a wrap template wraps on. */
-const WRAP_ROLE: Readonly<Record<string, string>> = { 'branch-cut': 'branch', 'nozzle-cut': 'nozzle', 'plane-cut': 'pipe', 'miter-end': 'pipe', 'miter-middle': 'pipe' };
+const WRAP_ROLE: Readonly<Record<string, string>> = { 'branch-cut': 'branch', 'nozzle-cut': 'nozzle', 'trunnion-cut': 'trunnion', 'plane-cut': 'pipe', 'miter-end': 'pipe', 'miter-middle': 'pipe' };
 
 describe('fixture goldens: job file to result contract', () => {
   for (const joint of JOINTS) {

@@ -94,6 +94,15 @@ export type { WeldEndBevel } from './weld/weld-end-bevel.js';
 export { weldPrepWarnings } from './weld/weld-warnings.js';
 export type { WeldPrepWarningCode, WeldPrepWarningOptions, WeldPrepWarningStation } from './weld/weld-warnings.js';
 
+// An elbow body (torus) as a host.
+export { torusOps, torusLocal, torusPoint, torusTapePosition } from './surfaces/torus.js';
+export type { TorusSurface, TorusLocalPoint, TorusTapePosition } from './surfaces/torus.js';
+
+// A trunnion or branch on an elbow.
+export type { ElbowRadius, ElbowSpec, ResolvedElbowSpec, TrunnionDirection, TrunnionSpec, ResolvedTrunnionSpec, TrunnionGeometry } from './trunnion/types.js';
+export { resolveElbowSpec, elbowSurface, LONG_RADIUS_PER_NPS, SHORT_RADIUS_PER_NPS, LONG_RADIUS_NPS_HALF_IN } from './trunnion/elbow-spec.js';
+export { solveTrunnion } from './trunnion/solve-trunnion.js';
+
 // Dished heads as hosts, and the nozzle joint.
 export { hemisphericalHeadOps } from './surfaces/hemispherical-head.js';
 export type { HemisphericalHeadSurface } from './surfaces/hemispherical-head.js';

@@ -104,6 +104,12 @@ export type { JointFitUp, WithFitUpOptions } from './fit-up/with-fit-up.js';
 export type { StationOrdinate, TemplateOrdinates } from './fit-up/template-ordinates.js';
 export { angleCheckLine, branchFitUpLines, miterFitUpLines, ordinateReferenceLine, planeCutFitUpLines } from './fit-up/fit-up-text.js';
 
+// A trunnion on an elbow.
+export type { LayoutTrunnionOptions, TrunnionLayout } from './trunnion/types.js';
+export { layoutTrunnion } from './trunnion/layout-trunnion.js';
+export { developElbowHole } from './trunnion/elbow-hole.js';
+export type { ElbowHoleInput } from './trunnion/elbow-hole.js';
+
 // A nozzle in a dished head.
 export type { LayoutNozzleOptions, NozzleLayout } from './nozzle/types.js';
 export { layoutNozzle } from './nozzle/layout-nozzle.js';

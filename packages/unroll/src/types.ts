@@ -20,6 +20,7 @@ import type { JointFitUp } from './fit-up/with-fit-up.js';
 import type { OrdinateReference } from './fit-up/ordinate-reference.js';
 import type { TemplateOrdinates } from './fit-up/template-ordinates.js';
 import type { NozzleLayout } from './nozzle/types.js';
+import type { TrunnionLayout } from './trunnion/types.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -254,7 +255,7 @@ export interface LayoutResultBase {
  * `reducer` (a cone, concentric or eccentric by its `form`), `nozzle` (a
  * nozzle in a dished head).
  */
-export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout;
+export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout | TrunnionLayout;
 
 /** The contract kinds of {@link LayoutResult}. */
 export type LayoutKind = LayoutResult['kind'];

@@ -35,6 +35,7 @@ export const GOOD_JOB: GoodJob = {
 const TEE = ['branch', '--header', 'NPS 12 STD', '--branch', 'NPS 6 STD'];
 const ELL = ['miter', '--pipe', 'NPS 10 STD', '--bend', '90', '--welds', '3', '--radius-nps', '1.5'];
 const CUT = ['cutback', '--pipe', 'NPS 6 STD', '--angle', '60'];
+const TRUNNION = ['trunnion', '--elbow', 'NPS 12 STD', '--trunnion', 'NPS 8 STD', '--along', '45'];
 const CONE = ['reducer', '--large', 'NPS 12 STD', '--small', 'NPS 8 STD', '--length', '7', '--plate', '3/8'];
 const without = (argv: readonly string[], option: string): string[] => {
   const i = argv.indexOf(option);
@@ -101,6 +102,13 @@ export const BAD_OPTIONS: readonly BadOptionCase[] = [
   { name: 'a miter radius beyond a kilometre', argv: [...without(ELL, '--radius-nps'), '--radius', '2000000mm'], code: 'OUT_OF_RANGE', field: '--radius' },
   { name: 'an included angle of 0.2°', argv: [...without(CONE, '--length'), '--included-angle', '0.2'], code: 'OUT_OF_RANGE', field: '--included-angle' },
   { name: 'an included angle of 180°', argv: [...without(CONE, '--length'), '--included-angle', '180'], code: 'OUT_OF_RANGE', field: '--included-angle' },
+  { name: 'a trunnion larger than its elbow', argv: ['trunnion', '--elbow', 'NPS 8 STD', '--trunnion', 'NPS 10 STD'], code: 'BRANCH_TOO_LARGE', field: '--trunnion' },
+  { name: 'a trunnion running off the bend end', argv: [...without(TRUNNION, '--along'), '--along', '4'], code: 'TRUNNION_OFF_ELBOW', field: '--along' },
+  { name: 'a trunnion past the bend', argv: [...without(TRUNNION, '--along'), '--along', '95'], code: 'OUT_OF_RANGE', field: '--along' },
+  { name: 'a trunnion without its elbow', argv: without(TRUNNION, '--elbow'), code: 'MISSING_INPUT', field: '--elbow' },
+  { name: 'a short radius NPS 1/2 elbow', argv: ['trunnion', '--elbow', 'NPS 1/2 STD', '--radius', 'short', '--trunnion', 'NPS 1/4 STD'], code: 'OUT_OF_RANGE', field: '--radius' },
+  { name: 'an elbow radius inside the pipe', argv: [...TRUNNION, '--radius', '5'], code: 'OUT_OF_RANGE', field: '--radius' },
+  { name: 'an unknown trunnion direction', argv: [...TRUNNION, '--direction', 'up'], code: 'BAD_CHOICE', field: '--direction' },
   { name: 'a reducer 12.75 in to 12.7499 in', argv: ['reducer', '--large', '12.75', '--small', '12.7499', '--length', '8', '--plate', '0'], code: 'OUT_OF_RANGE', field: '--small' },
   { name: 'a reducer longer than its ends allow (0.1° cone)', argv: ['reducer', '--large', '12', '--small', '11.9', '--length', '100', '--plate', '0'], code: 'OUT_OF_RANGE', field: '--length' },
   { name: 'a reducer whose small end is the larger', argv: ['reducer', '--large', 'NPS 8 STD', '--small', 'NPS 12 STD', '--length', '7', '--plate', '3/8'], code: 'OUT_OF_RANGE', field: '--small' },
@@ -197,7 +205,11 @@ const cone = { piece: 'S118-03 cone', joint: 'reducer', large: 'NPS 12 STD', sma
 const asPiece = (p: Record<string, unknown>, change: Record<string, unknown> = {}) => (good: GoodJob) => ({ ...good, pieces: [{ ...p, ...change }] });
 
 /** Bad job files. */
+const elbowTrunnion = { piece: 'S118-04 trunnion', joint: 'trunnion', elbow: 'NPS 12 STD', trunnion: 'NPS 8 STD', along: 45 };
+
 export const BAD_JOBS: readonly BadJobCase[] = [
+  { name: 'a trunnion off the bend end in a job', job: asPiece(elbowTrunnion, { along: 3 }), code: 'TRUNNION_OFF_ELBOW', field: 'pieces[0].along' },
+  { name: 'a trunnion larger than its elbow in a job', job: asPiece(elbowTrunnion, { trunnion: 'NPS 14 STD' }), code: 'BRANCH_TOO_LARGE', field: 'pieces[0].trunnion' },
   { name: 'a job that is a list', job: () => [], code: 'BAD_JOB', field: 'job' },
   { name: 'a job that is text', job: () => 'tee', code: 'BAD_JOB', field: 'job' },
   { name: 'an unknown key on the job', job: (g) => ({ ...g, colour: 'red' }), code: 'BAD_JOB', field: 'colour' },

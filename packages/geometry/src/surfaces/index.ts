@@ -10,3 +10,4 @@ export * from './hemispherical-head.js';
 export * from './ellipsoidal-head.js';
 export * from './torispherical-head.js';
 export * from './heads.js';
+export * from './torus.js';

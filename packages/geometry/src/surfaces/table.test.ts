@@ -82,7 +82,7 @@ describe('a host kind added only in the tests, through the public table', () => 
   });
 
   it('SURFACES has one entry for each host kind, and the entry is what surfaceOpsFor returns', () => {
-    expect(Object.keys(SURFACES).sort()).toEqual(['cone', 'cylinder', 'ellipsoidal-head', 'hemispherical-head', 'plane', 'torispherical-head']);
+    expect(Object.keys(SURFACES).sort()).toEqual(['cone', 'cylinder', 'ellipsoidal-head', 'hemispherical-head', 'plane', 'torispherical-head', 'torus']);
     const header: HostSurface = { kind: 'cylinder', radius: 1, axisPoint: [0, 0, 0], axisDirection: [1, 0, 0] };
     expect(surfaceOpsFor(header)).toBe(SURFACES.cylinder);
     expect(lineRoots(header, { origin: [0, 1, 5], direction: [0, 0, -1] })).toEqual([{ tMm: 5, tangent: true }]);

@@ -9,6 +9,7 @@ import { planeOps, type PlaneSurface } from './plane.js';
 import { ellipsoidalHeadOps, type EllipsoidalHeadSurface } from './ellipsoidal-head.js';
 import { hemisphericalHeadOps, type HemisphericalHeadSurface } from './hemispherical-head.js';
 import { torisphericalHeadOps, type TorisphericalHeadSurface } from './torispherical-head.js';
+import { torusOps, type TorusSurface } from './torus.js';
 import type { HostShape, SurfaceOps, SurfaceTable } from './types.js';
 
 /**
@@ -21,9 +22,10 @@ export type HostSurface =
   | ConeSurface
   | HemisphericalHeadSurface
   | EllipsoidalHeadSurface
-  | TorisphericalHeadSurface;
+  | TorisphericalHeadSurface
+  | TorusSurface;
 
-/** The kinds of {@link HostSurface}: `'cylinder' | 'plane' | 'cone'` and the dished heads `'hemispherical-head' | 'ellipsoidal-head' | 'torispherical-head'`. */
+/** The kinds of {@link HostSurface}: `'cylinder' | 'plane' | 'cone'` and the dished heads `'hemispherical-head' | 'ellipsoidal-head' | 'torispherical-head'` and the elbow body `'torus'`. */
 export type HostKind = HostSurface['kind'];
 
 /**
@@ -39,6 +41,7 @@ export const SURFACES: SurfaceTable<HostSurface> = {
   'hemispherical-head': hemisphericalHeadOps,
   'ellipsoidal-head': ellipsoidalHeadOps,
   'torispherical-head': torisphericalHeadOps,
+  torus: torusOps,
 };
 
 /** The `surfaces` option: a table of surface operations covering the kinds of `S`. */

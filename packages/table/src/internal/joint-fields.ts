@@ -4,7 +4,7 @@
  * converted by its quantity: lengths to the result's unit, angles in degrees,
  * counts as they are. Internal to the package; `toResultJson` is the way in.
  */
-import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, NozzleLayout, PlaneCutLayout } from '@girth/unroll';
+import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, NozzleLayout, PlaneCutLayout, TrunnionLayout } from '@girth/unroll';
 
 /** How the contract writes one number: by its quantity, naming its field in errors. */
 export interface FieldWriters {
@@ -36,6 +36,21 @@ function nozzleFields(r: NozzleLayout, w: FieldWriters): Record<string, unknown>
     gap: w.length(r.gapMm, 'gapMm'),
     stationCount: w.count(r.stations, 'stations'),
     aroundTapeBound: w.length(r.aroundTapeBoundMm, 'aroundTapeBoundMm'),
+  };
+}
+
+function trunnionFields(r: TrunnionLayout, w: FieldWriters): Record<string, unknown> {
+  return {
+    bendRadius: w.length(r.bendRadiusMm, 'bendRadiusMm'),
+    bendDeg: w.angle(r.bendDeg, 'bendDeg'),
+    alongDeg: w.angle(r.alongDeg, 'alongDeg'),
+    aroundDeg: w.angle(r.aroundDeg, 'aroundDeg'),
+    direction: String(r.direction),
+    tiltFromNormalDeg: w.angle(r.tiltFromNormalDeg, 'tiltFromNormalDeg'),
+    fit: String(r.fit),
+    gap: w.length(r.gapMm, 'gapMm'),
+    stationCount: w.count(r.stations, 'stations'),
+    alongTapeBound: w.length(r.alongTapeBoundMm, 'alongTapeBoundMm'),
   };
 }
 
@@ -158,6 +173,8 @@ export function jointFields(result: LayoutResult, w: FieldWriters): Record<strin
       return coneFields(result, w);
     case 'nozzle':
       return nozzleFields(result, w);
+    case 'trunnion':
+      return trunnionFields(result, w);
     default:
       return {};
   }

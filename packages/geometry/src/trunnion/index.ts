@@ -1,0 +1,3 @@
+export * from './types.js';
+export * from './elbow-spec.js';
+export * from './solve-trunnion.js';
