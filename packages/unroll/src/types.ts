@@ -122,12 +122,13 @@ export type DevelopmentSurfaceKind = 'od' | 'mid';
 /**
  * The surface a template's girth is measured on: `od` (wrapped on the outside
  * of the pipe) or `mid`, the mid-thickness (neutral) surface of a plate of
- * `plateThicknessMm` rolled into the pipe, diameter OD - t. The cut keeps its
+ * `plateThicknessMm` rolled into the pipe, diameter OD - t, or rolled onto
+ * its outside (a reinforcing pad), diameter OD + t. The cut keeps its
  * true place on the pipe; only the girth is measured on another diameter.
  */
 export interface Development {
   readonly surface: DevelopmentSurfaceKind;
-  /** Diameter the girth is measured on, mm: the OD, or OD - t. */
+  /** Diameter the girth is measured on, mm: the OD, OD - t, or OD + t for a plate on the outside. */
   readonly diameterMm: number;
   /** The OD of the pipe the template is for, mm. */
   readonly odMm: number;
