@@ -114,6 +114,9 @@ export type { LayoutPadOptions, PadLayout, PadSize, PadSpec } from './pad/types.
 export { layoutPad, TELL_TALE_HOLE_MM } from './pad/layout-pad.js';
 export { padEdges } from './pad/pad-outline.js';
 export type { PadEdges } from './pad/pad-outline.js';
+// Two branches on one header.
+export { layoutWye } from './wye/layout-wye.js';
+export type { WyeBranch, WyeLayout, WyeSpec } from './wye/layout-wye.js';
 // Cutting-table parts: closed contours and the development surface.
 export type { ClosedPart, Development, DevelopmentSurfaceKind } from './types.js';
 export { closeTemplate, deepestCutbackMm, DEFAULT_STUB_MARGIN_MM } from './closed/close-template.js';
