@@ -72,7 +72,7 @@ Examples:
   girth branch --units mm --header "DN 300 x 8" --branch "DN 150 x 7.1" --json
   girth branch --header "NPS 10 XS" --branch "NPS 8 XS" --cut-on od --svg tee.svg
   girth branch --header "NPS 12 STD" --branch "NPS 6 STD" --angle 45 --groove-angle 45 --land 1/16 --gap 1/8
-  girth branch --header "NPS 12 STD" --branch "NPS 6 STD" --ordinates-from short-point --reference-lines --svg tee.svg`,
+  girth branch --header "NPS 12 STD" --branch "NPS 6 STD" --ordinates-from short-point --reference-lines --svg tee-short.svg`,
   fieldNames: { angleDeg: 'angle', offsetMm: 'offset', gapMm: 'gap', fit: 'fit', header: 'header', branch: 'branch', contact: 'branchSurface', cutOn: 'cutOn', ...WELD_PREP_FIELD_NAMES, ...FIT_UP_FIELD_NAMES },
   fromOptions: (args) => ({
     joint: 'branch',
