@@ -17,7 +17,7 @@ import { planJob } from './job/run-job.js';
 import { parseJob } from './job/schema.js';
 
 const FIXTURES = fileURLToPath(new URL('../../../fixtures', import.meta.url));
-const JOINTS = ['branch', 'miter', 'cutback', 'reducer', 'nozzle', 'trunnion'] as const;
+const JOINTS = ['branch', 'miter', 'cutback', 'reducer', 'nozzle', 'trunnion', 'pad'] as const;
 const UPDATE = process.env.UPDATE_GOLDEN === '1';
 
 /** The contract of every piece of a job file, as the golden holds it. */

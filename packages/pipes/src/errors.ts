@@ -46,6 +46,10 @@ export type GirthErrorCode =
   | 'NOZZLE_OFF_HEAD'
   /** A branch or trunnion on an elbow whose hole runs off the bend (past a bend end). */
   | 'TRUNNION_OFF_ELBOW'
+  /** A reinforcing pad whose ring width or outside size does not clear the branch hole, or that would wrap right round its header. */
+  | 'PAD_SIZE'
+  /** Two holes in one header that run into each other (a wye or cross whose branches meet each other). */
+  | 'HOLES_OVERLAP'
   /** The pieces do not meet, so there is no cut to lay out. */
   | 'NO_INTERSECTION'
   /** A word that is not one of the allowed ones (a fit, a surface, a unit choice). */

@@ -115,6 +115,14 @@ export type { LayoutNozzleOptions, NozzleLayout } from './nozzle/types.js';
 export { layoutNozzle } from './nozzle/layout-nozzle.js';
 export { developHeadHole } from './nozzle/head-hole.js';
 export type { HeadHoleInput } from './nozzle/head-hole.js';
+// A reinforcing pad under a branch.
+export type { LayoutPadOptions, PadLayout, PadSize, PadSpec } from './pad/types.js';
+export { layoutPad, TELL_TALE_HOLE_MM } from './pad/layout-pad.js';
+export { padEdges } from './pad/pad-outline.js';
+export type { PadEdges } from './pad/pad-outline.js';
+// Two branches on one header.
+export { layoutWye } from './wye/layout-wye.js';
+export type { WyeBranch, WyeLayout, WyeSpec } from './wye/layout-wye.js';
 // Cutting-table parts: closed contours and the development surface.
 export type { ClosedPart, Development, DevelopmentSurfaceKind } from './types.js';
 export { closeTemplate, deepestCutbackMm, DEFAULT_STUB_MARGIN_MM } from './closed/close-template.js';

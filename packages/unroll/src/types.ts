@@ -21,6 +21,7 @@ import type { OrdinateReference } from './fit-up/ordinate-reference.js';
 import type { TemplateOrdinates } from './fit-up/template-ordinates.js';
 import type { NozzleLayout } from './nozzle/types.js';
 import type { TrunnionLayout } from './trunnion/types.js';
+import type { PadLayout } from './pad/types.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -122,12 +123,13 @@ export type DevelopmentSurfaceKind = 'od' | 'mid';
 /**
  * The surface a template's girth is measured on: `od` (wrapped on the outside
  * of the pipe) or `mid`, the mid-thickness (neutral) surface of a plate of
- * `plateThicknessMm` rolled into the pipe, diameter OD - t. The cut keeps its
+ * `plateThicknessMm` rolled into the pipe, diameter OD - t, or rolled onto
+ * its outside (a reinforcing pad), diameter OD + t. The cut keeps its
  * true place on the pipe; only the girth is measured on another diameter.
  */
 export interface Development {
   readonly surface: DevelopmentSurfaceKind;
-  /** Diameter the girth is measured on, mm: the OD, or OD - t. */
+  /** Diameter the girth is measured on, mm: the OD, OD - t, or OD + t for a plate on the outside. */
   readonly diameterMm: number;
   /** The OD of the pipe the template is for, mm. */
   readonly odMm: number;
@@ -253,9 +255,9 @@ export interface LayoutResultBase {
  * What a joint's layout returns, told apart by `kind` (contract values, never
  * renamed): `branch`, `miter`, `plane-cut` (a pipe end cut to a plane) or
  * `reducer` (a cone, concentric or eccentric by its `form`), `nozzle` (a
- * nozzle in a dished head).
+ * nozzle in a dished head), `trunnion` (a branch or trunnion on an elbow), `pad` (a reinforcing pad under a branch).
  */
-export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout | TrunnionLayout;
+export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout | TrunnionLayout | PadLayout;
 
 /** The contract kinds of {@link LayoutResult}. */
 export type LayoutKind = LayoutResult['kind'];

@@ -37,6 +37,7 @@ const ELL = ['miter', '--pipe', 'NPS 10 STD', '--bend', '90', '--welds', '3', '-
 const CUT = ['cutback', '--pipe', 'NPS 6 STD', '--angle', '60'];
 const TRUNNION = ['trunnion', '--elbow', 'NPS 12 STD', '--trunnion', 'NPS 8 STD', '--along', '45'];
 const CONE = ['reducer', '--large', 'NPS 12 STD', '--small', 'NPS 8 STD', '--length', '7', '--plate', '3/8'];
+const PAD = ['pad', '--header', 'NPS 12 STD', '--branch', 'NPS 6 STD', '--thickness', '3/8'];
 const without = (argv: readonly string[], option: string): string[] => {
   const i = argv.indexOf(option);
   return [...argv.slice(0, i), ...argv.slice(i + 2)];
@@ -197,6 +198,12 @@ export const BAD_OPTIONS: readonly BadOptionCase[] = [
   { name: 'run with two job files', argv: ['run', 'a.json', 'b.json', '--out', 'o'], code: 'BAD_OPTION', field: 'job' },
   { name: 'pipe with an unknown size', argv: ['pipe', 'NPS 9 STD'], code: 'UNKNOWN_SIZE', field: 'pipe' },
   { name: 'pipe in an unknown unit', argv: ['pipe', 'NPS 6 STD', '--units', 'cm'], code: 'BAD_CHOICE', field: '--units' },
+  // Reinforcing pads: the size is the user's, but it must clear the hole.
+  { name: 'a pad without its thickness', argv: ['pad', '--header', 'NPS 12 STD', '--branch', 'NPS 6 STD', '--width', '3'], code: 'MISSING_INPUT', field: '--thickness' },
+  { name: 'a pad of zero width', argv: [...PAD, '--width', '0'], code: 'NEGATIVE', field: '--width' },
+  { name: 'a pad outside size within the hole', argv: [...PAD, '--outside', '6'], code: 'PAD_SIZE', field: '--outside' },
+  { name: 'a pad wrapping right round its header', argv: [...PAD, '--width', '60'], code: 'PAD_SIZE', field: '--width' },
+  { name: 'a pad given both width and outside size', argv: [...PAD, '--width', '3', '--outside', '14'], code: 'BAD_OPTION', field: '--width' },
 ];
 
 const piece = (change: Record<string, unknown>) => (good: GoodJob) => ({ ...good, pieces: [{ ...good.pieces[0], ...change }] });
@@ -282,5 +289,11 @@ export const BAD_JOBS: readonly BadJobCase[] = [
     job: (g) => ({ ...g, pieces: [g.pieces[0], { ...g.pieces[0], piece: 'S118 01 TEE' }] }),
     code: 'BAD_JOB',
     field: 'pieces[1].piece',
+  },
+  {
+    name: 'a pad narrower than nothing',
+    job: asPiece({ piece: 'S118-04 pad', joint: 'pad', header: 'NPS 12 STD', branch: 'NPS 6 STD', thickness: '3/8', width: -1 }),
+    code: 'NEGATIVE',
+    field: 'pieces[0].width',
   },
 ];

@@ -4,7 +4,7 @@
  * converted by its quantity: lengths to the result's unit, angles in degrees,
  * counts as they are. Internal to the package; `toResultJson` is the way in.
  */
-import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, NozzleLayout, PlaneCutLayout, TrunnionLayout } from '@girth/unroll';
+import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, NozzleLayout, PadLayout, PlaneCutLayout, TrunnionLayout } from '@girth/unroll';
 
 /** How the contract writes one number: by its quantity, naming its field in errors. */
 export interface FieldWriters {
@@ -51,6 +51,17 @@ function trunnionFields(r: TrunnionLayout, w: FieldWriters): Record<string, unkn
     gap: w.length(r.gapMm, 'gapMm'),
     stationCount: w.count(r.stations, 'stations'),
     alongTapeBound: w.length(r.alongTapeBoundMm, 'alongTapeBoundMm'),
+  };
+}
+
+function padFields(r: PadLayout, w: FieldWriters): Record<string, unknown> {
+  return {
+    angleDeg: w.angle(r.angleDeg, 'angleDeg'),
+    thickness: w.length(r.thicknessMm, 'thicknessMm'),
+    sizedBy: String(r.sizedBy),
+    width: w.length(r.widthMm, 'widthMm'),
+    midRadius: w.length(r.midRadiusMm, 'midRadiusMm'),
+    stationCount: w.count(r.stations, 'stations'),
   };
 }
 
@@ -175,6 +186,8 @@ export function jointFields(result: LayoutResult, w: FieldWriters): Record<strin
       return nozzleFields(result, w);
     case 'trunnion':
       return trunnionFields(result, w);
+    case 'pad':
+      return padFields(result, w);
     default:
       return {};
   }

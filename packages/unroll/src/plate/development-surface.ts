@@ -22,6 +22,10 @@ export interface DevelopmentSurfaceOptions {
  */
 export function developmentNote(d: Development): FactLine {
   if (d.surface === 'od') return factLine`Girth measured on the OD ${lengthFact(d.odMm)} (wrap laid on the pipe).`;
+  if (d.diameterMm > d.odMm) {
+    // A plate rolled onto the pipe's outside (a reinforcing pad): its mid surface lies outside the OD.
+    return factLine`Cut flat from ${lengthFact(d.plateThicknessMm ?? 0)} plate and rolled onto the pipe: girth measured on the mid-thickness diameter ${lengthFact(d.diameterMm)} (OD plus the plate thickness); the outline keeps its place on the OD.`;
+  }
   return factLine`Cut flat from ${lengthFact(d.plateThicknessMm ?? 0)} plate and rolled: girth measured on the mid-thickness diameter ${lengthFact(d.diameterMm)} (OD less the plate thickness); the cut keeps its place on the pipe.`;
 }
 
