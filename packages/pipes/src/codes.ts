@@ -40,6 +40,7 @@ export const ERROR_CODES: Readonly<Record<GirthErrorCode, string>> = {
   BRANCH_TOO_LARGE: 'a branch that does not fit on its header',
   OFFSET_MISSES: 'a branch offset that takes the branch off the header',
   NOZZLE_OFF_HEAD: 'a nozzle placed or sized so its hole runs off the dished part of the head (past the knuckle onto the straight flange)',
+  HOLES_OVERLAP: 'two branch holes on one shell plate that overlap (naming the later branch)',
   NO_INTERSECTION: 'pieces that do not meet as placed',
   BAD_CHOICE: 'a word that is not one of the allowed ones (--fit, --surface, units, outputs; fit, fitSurface, diametersAt, seam in library calls)',
   BAD_TEXT: 'a label with control characters or too long to print',

@@ -44,6 +44,8 @@ export type GirthErrorCode =
   | 'OFFSET_MISSES'
   /** A nozzle whose hole runs off the dished part of its head (past the knuckle onto the straight flange, or off the head). */
   | 'NOZZLE_OFF_HEAD'
+  /** Two holes cut in one shell plate overlap. */
+  | 'HOLES_OVERLAP'
   /** The pieces do not meet, so there is no cut to lay out. */
   | 'NO_INTERSECTION'
   /** A word that is not one of the allowed ones (a fit, a surface, a unit choice). */

@@ -20,6 +20,7 @@ import type { JointFitUp } from './fit-up/with-fit-up.js';
 import type { OrdinateReference } from './fit-up/ordinate-reference.js';
 import type { TemplateOrdinates } from './fit-up/template-ordinates.js';
 import type { NozzleLayout } from './nozzle/types.js';
+import type { ShellPlateLayout } from './shell-plate/types.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -252,9 +253,10 @@ export interface LayoutResultBase {
  * What a joint's layout returns, told apart by `kind` (contract values, never
  * renamed): `branch`, `miter`, `plane-cut` (a pipe end cut to a plane) or
  * `reducer` (a cone, concentric or eccentric by its `form`), `nozzle` (a
- * nozzle in a dished head).
+ * nozzle in a dished head), `shell-plate` (a shell rolled from plate with its
+ * branch holes).
  */
-export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout;
+export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout | ShellPlateLayout;
 
 /** The contract kinds of {@link LayoutResult}. */
 export type LayoutKind = LayoutResult['kind'];
