@@ -9,12 +9,13 @@ import type { JointDefinition } from './definition.js';
 import { miterJoint, type MiterInput } from './miter.js';
 import { reducerJoint, type ReducerInput } from './reducer.js';
 import { nozzleJoint, type NozzleInput } from './nozzle.js';
+import { shellPlateJoint, type ShellPlateInput } from './shell-plate.js';
 
 /** Any joint Girth lays out, as a fitter writes it. */
-export type JointInput = BranchInput | MiterInput | CutbackInput | ReducerInput | NozzleInput;
+export type JointInput = BranchInput | MiterInput | CutbackInput | ReducerInput | NozzleInput | ShellPlateInput;
 
 /** The joints, in help order. */
-export const JOINTS: readonly JointDefinition<JointInput>[] = [branchJoint, miterJoint, cutbackJoint, reducerJoint, nozzleJoint] as unknown as readonly JointDefinition<JointInput>[];
+export const JOINTS: readonly JointDefinition<JointInput>[] = [branchJoint, miterJoint, cutbackJoint, reducerJoint, nozzleJoint, shellPlateJoint] as unknown as readonly JointDefinition<JointInput>[];
 
 /**
  * The joint of that name, or `undefined`.

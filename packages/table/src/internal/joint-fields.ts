@@ -4,7 +4,7 @@
  * converted by its quantity: lengths to the result's unit, angles in degrees,
  * counts as they are. Internal to the package; `toResultJson` is the way in.
  */
-import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, NozzleLayout, PlaneCutLayout } from '@girth/unroll';
+import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, NozzleLayout, PlaneCutLayout, ShellPlateLayout } from '@girth/unroll';
 
 /** How the contract writes one number: by its quantity, naming its field in errors. */
 export interface FieldWriters {
@@ -36,6 +36,26 @@ function nozzleFields(r: NozzleLayout, w: FieldWriters): Record<string, unknown>
     gap: w.length(r.gapMm, 'gapMm'),
     stationCount: w.count(r.stations, 'stations'),
     aroundTapeBound: w.length(r.aroundTapeBoundMm, 'aroundTapeBoundMm'),
+  };
+}
+
+function shellPlateFields(r: ShellPlateLayout, w: FieldWriters): Record<string, unknown> {
+  return {
+    length: w.length(r.lengthMm, 'lengthMm'),
+    thickness: w.length(r.thicknessMm, 'thicknessMm'),
+    plateWidth: w.length(r.plateWidthMm, 'plateWidthMm'),
+    courses: w.count(r.courses, 'courses'),
+    courseLength: w.length(r.courseLengthMm, 'courseLengthMm'),
+    seamClock: w.count(r.seamClockHours, 'seamClockHours'),
+    weldZone: w.length(r.weldZoneMm, 'weldZoneMm'),
+    holes: r.holes.map((h, i) => ({
+      name: String(h.name),
+      course: w.count(h.course, `holes[${i}].course`),
+      girth: w.length(h.girthMm, `holes[${i}].girthMm`),
+      axial: w.length(h.axialMm, `holes[${i}].axialMm`),
+      station: w.length(h.stationMm, `holes[${i}].stationMm`),
+      clock: w.count(h.clockHours, `holes[${i}].clockHours`),
+    })),
   };
 }
 
@@ -158,6 +178,8 @@ export function jointFields(result: LayoutResult, w: FieldWriters): Record<strin
       return coneFields(result, w);
     case 'nozzle':
       return nozzleFields(result, w);
+    case 'shell-plate':
+      return shellPlateFields(result, w);
     default:
       return {};
   }

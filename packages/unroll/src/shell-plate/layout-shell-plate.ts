@@ -236,7 +236,7 @@ function seamWarnings(h: PlacedHole, c: number, courses: number, courseMm: numbe
   const lo = c * courseMm;
   const hi = (c + 1) * courseMm;
   if ((c > 0 && minY < lo) || (c < courses - 1 && maxY > hi)) {
-    out.push({ code: 'HOLE_CROSSES_COURSE_SEAM', field: f, message: `The hole for ${h.name} runs over a seam between courses ${c + 1} and ${minY < lo ? c : c + 2}: move the branch along the shell; the hole is drawn past its course's edge.` });
+    out.push({ code: 'HOLE_CROSSES_COURSE_SEAM', field: f, message: `The hole for ${h.name} runs over the seam between courses ${minY < lo ? `${c} and ${c + 1}` : `${c + 1} and ${c + 2}`}: move the branch along the shell; the hole is drawn past its course's edge.` });
   } else if ((c > 0 && minY - lo < weldZoneMm) || (c < courses - 1 && hi - maxY < weldZoneMm)) {
     out.push({ code: 'HOLE_NEAR_SEAM', field: f, message: `A seam between courses is within the weld zone of the hole for ${h.name}.` });
   }
