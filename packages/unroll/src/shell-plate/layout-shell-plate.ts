@@ -279,7 +279,7 @@ function courseTemplate(k: CourseInput): FlatTemplate {
     marks.push({ kind: 'segment', from: [cx - ARM_MM, cy], to: [cx + ARM_MM, cy] }, { kind: 'segment', from: [cx, cy - ARM_MM], to: [cx, cy + ARM_MM] });
     const top = Math.max(...h.outline.map((p) => p[1])) - y0;
     labels.push({ text: `${h.name} ${h.label}`, at: [cx - ARM_MM, top + LABEL_MM], heightMm: LABEL_MM });
-    stations.push({ n: i + 1, angleDeg: h.clockHours * 30, values: { girth: cx, axial: cy, station: h.stationMm } });
+    stations.push({ n: i + 1, angleDeg: (h.clockHours % 12) * 30, values: { girth: cx, axial: cy, station: h.stationMm } });
   });
   labels.push({ text: `SEAM ${clockWords(k.seamClockHours).toUpperCase()}`, at: [LABEL_MM, len - 2 * LABEL_MM], heightMm: LABEL_MM });
 
@@ -306,7 +306,7 @@ function courseTemplate(k: CourseInput): FlatTemplate {
     stationColumns: [
       { key: 'girth', heading: 'Girth from seam', quantity: 'length' },
       { key: 'axial', heading: 'Up from edge', quantity: 'length' },
-      { key: 'station', heading: 'Station', quantity: 'length' },
+      { key: 'station', heading: 'Along shell', quantity: 'length' },
     ],
     stations,
     development: k.development,
