@@ -17,7 +17,7 @@ import { planJob } from './job/run-job.js';
 import { parseJob } from './job/schema.js';
 
 const FIXTURES = fileURLToPath(new URL('../../../fixtures', import.meta.url));
-const JOINTS = ['branch', 'miter', 'cutback', 'reducer', 'nozzle', 'trunnion', 'pad'] as const;
+const JOINTS = ['branch', 'miter', 'cutback', 'reducer', 'nozzle', 'trunnion', 'pad', 'shell-plate'] as const;
 const UPDATE = process.env.UPDATE_GOLDEN === '1';
 
 /** The contract of every piece of a job file, as the golden holds it. */
@@ -55,6 +55,11 @@ describe('fixture goldens: job file to result contract', () => {
             const pipe = json.pipes.find((p) => p.role === role)!;
             // Girth of a wrap = pi x OD (REFERENCES.md); contract numbers are rounded to 1e-6 of the unit.
             expect(Math.abs(t.stretchOut! - Math.PI * pipe.od), `${file} ${t.id}`).toBeLessThanOrEqual(1e-6);
+          }
+          if (json.kind === 'shell-plate') {
+            // Plate width = pi x (OD - t) (common practice: a rolled plate keeps its length at mid-thickness).
+            const header = json.pipes.find((p) => p.role === 'header')!;
+            expect(Math.abs((json as unknown as { plateWidth: number }).plateWidth - Math.PI * (header.od - header.wall)), file).toBeLessThanOrEqual(1e-5);
           }
         }
       });

@@ -42,7 +42,7 @@ export const ERROR_CODES: Readonly<Record<GirthErrorCode, string>> = {
   NOZZLE_OFF_HEAD: 'a nozzle placed or sized so its hole runs off the dished part of the head (past the knuckle onto the straight flange)',
   TRUNNION_OFF_ELBOW: 'a branch or trunnion on an elbow placed or sized so its hole runs off the bend onto the straight ends',
   PAD_SIZE: 'a reinforcing pad whose ring width or outside size does not clear the branch hole, or that would wrap right round its header',
-  HOLES_OVERLAP: 'two branches on one header whose holes run into each other, so the branches would meet each other too',
+  HOLES_OVERLAP: 'two branch holes in one header or shell plate that run into each other (naming the later branch)',
   NO_INTERSECTION: 'pieces that do not meet as placed',
   BAD_CHOICE: 'a word that is not one of the allowed ones (--fit, --surface, units, outputs; fit, fitSurface, diametersAt, seam in library calls)',
   BAD_TEXT: 'a label with control characters or too long to print',

@@ -111,7 +111,11 @@ function pipeJson(p: PipeUsed, i: number, toUnit: (mm: unknown, field: string) =
  *   `pieces`, and for the eccentric form `seam` and `outline`;
  * - `nozzle`: `offset`, `direction`, `tiltDeg`, `fit`, `gap`,
  *   `stationCount`, `aroundTapeBound` (the most a straight-pulled tape reads
- *   under the head hole's `around`).
+ *   under the head hole's `around`);
+ * - `shell-plate`: `length`, `thickness`, `plateWidth` (pi x (OD - t)),
+ *   `courses`, `courseLength`, `seamClock` (hours), `weldZone`, `holes:
+ *   [{ name, course, girth, axial, station, clock }]` (girth from the seam,
+ *   axial from the course's lower edge, station along the shell).
  *
  * With weld preparation (only then): the cut templates' station columns
  * `dihedral` and `torch` (and `torchTilt` on a header hole), degrees, and

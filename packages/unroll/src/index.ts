@@ -129,3 +129,5 @@ export { closeTemplate, deepestCutbackMm, DEFAULT_STUB_MARGIN_MM } from './close
 export type { CloseTemplateOptions } from './closed/close-template.js';
 export { onDevelopmentSurface, developmentNote } from './plate/development-surface.js';
 export type { DevelopmentSurfaceOptions } from './plate/development-surface.js';
+export type { ShellPlateBranch, ShellPlateSpec, ShellPlateOptions, ShellPlateHole, ShellPlateLayout } from './shell-plate/types.js';
+export { layoutShellPlate, defaultWeldZoneMm, DEFAULT_SEAM_CLOCK_HOURS, MAX_SHELL_COURSES } from './shell-plate/layout-shell-plate.js';

@@ -22,6 +22,7 @@ import type { TemplateOrdinates } from './fit-up/template-ordinates.js';
 import type { NozzleLayout } from './nozzle/types.js';
 import type { TrunnionLayout } from './trunnion/types.js';
 import type { PadLayout } from './pad/types.js';
+import type { ShellPlateLayout } from './shell-plate/types.js';
 
 /** A point on the flat, `[x, y]` in mm. */
 export type Point2 = readonly [number, number];
@@ -255,9 +256,11 @@ export interface LayoutResultBase {
  * What a joint's layout returns, told apart by `kind` (contract values, never
  * renamed): `branch`, `miter`, `plane-cut` (a pipe end cut to a plane) or
  * `reducer` (a cone, concentric or eccentric by its `form`), `nozzle` (a
- * nozzle in a dished head), `trunnion` (a branch or trunnion on an elbow), `pad` (a reinforcing pad under a branch).
+ * nozzle in a dished head), `trunnion` (a branch or trunnion on an elbow), `pad`
+ * (a reinforcing pad under a branch), `shell-plate` (a shell rolled from plate
+ * with its branch holes).
  */
-export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout | TrunnionLayout | PadLayout;
+export type LayoutResult = BranchLayout | MiterLayout | PlaneCutLayout | ConeLayout | NozzleLayout | TrunnionLayout | PadLayout | ShellPlateLayout;
 
 /** The contract kinds of {@link LayoutResult}. */
 export type LayoutKind = LayoutResult['kind'];

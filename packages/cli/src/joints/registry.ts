@@ -11,12 +11,13 @@ import { reducerJoint, type ReducerInput } from './reducer.js';
 import { nozzleJoint, type NozzleInput } from './nozzle.js';
 import { trunnionJoint, type TrunnionInput } from './trunnion.js';
 import { padJoint, type PadInput } from './pad.js';
+import { shellPlateJoint, type ShellPlateInput } from './shell-plate.js';
 
 /** Any joint Girth lays out, as a fitter writes it. */
-export type JointInput = BranchInput | MiterInput | CutbackInput | ReducerInput | NozzleInput | TrunnionInput | PadInput;
+export type JointInput = BranchInput | MiterInput | CutbackInput | ReducerInput | NozzleInput | TrunnionInput | PadInput | ShellPlateInput;
 
 /** The joints, in help order. */
-export const JOINTS: readonly JointDefinition<JointInput>[] = [branchJoint, miterJoint, cutbackJoint, reducerJoint, nozzleJoint, trunnionJoint, padJoint] as unknown as readonly JointDefinition<JointInput>[];
+export const JOINTS: readonly JointDefinition<JointInput>[] = [branchJoint, miterJoint, cutbackJoint, reducerJoint, nozzleJoint, trunnionJoint, padJoint, shellPlateJoint] as unknown as readonly JointDefinition<JointInput>[];
 
 /**
  * The joint of that name, or `undefined`.

@@ -38,6 +38,7 @@ const CUT = ['cutback', '--pipe', 'NPS 6 STD', '--angle', '60'];
 const TRUNNION = ['trunnion', '--elbow', 'NPS 12 STD', '--trunnion', 'NPS 8 STD', '--along', '45'];
 const CONE = ['reducer', '--large', 'NPS 12 STD', '--small', 'NPS 8 STD', '--length', '7', '--plate', '3/8'];
 const PAD = ['pad', '--header', 'NPS 12 STD', '--branch', 'NPS 6 STD', '--thickness', '3/8'];
+const SHELL = ['shell-plate', '--header', 'NPS 24 STD', '--length', '96', '--holes', 'N1, NPS 6 STD, 30, 12'];
 const without = (argv: readonly string[], option: string): string[] => {
   const i = argv.indexOf(option);
   return [...argv.slice(0, i), ...argv.slice(i + 2)];
@@ -204,11 +205,17 @@ export const BAD_OPTIONS: readonly BadOptionCase[] = [
   { name: 'a pad outside size within the hole', argv: [...PAD, '--outside', '6'], code: 'PAD_SIZE', field: '--outside' },
   { name: 'a pad wrapping right round its header', argv: [...PAD, '--width', '60'], code: 'PAD_SIZE', field: '--width' },
   { name: 'a pad given both width and outside size', argv: [...PAD, '--width', '3', '--outside', '14'], code: 'BAD_OPTION', field: '--width' },
+  { name: 'shell plate without its length', argv: without(SHELL, '--length'), code: 'MISSING_INPUT', field: '--length' },
+  { name: 'shell plate seam at 13 o\'clock', argv: [...SHELL, '--seam-clock', '13'], code: 'OUT_OF_RANGE', field: '--seam-clock' },
+  { name: 'shell plate hole with three parts', argv: ['shell-plate', '--header', 'NPS 24 STD', '--length', '96', '--holes', 'N1, NPS 6 STD, 30'], code: 'BAD_OPTION', field: '--holes' },
+  { name: 'shell plate holes overlapping', argv: ['shell-plate', '--header', 'NPS 24 STD', '--length', '96', '--holes', 'N1, NPS 6 STD, 30, 12; N2, NPS 6 STD, 33, 12'], code: 'HOLES_OVERLAP', field: '--holes' },
+  { name: 'shell plate negative plate length', argv: [...SHELL, '--max-plate-length', '-4'], code: 'NEGATIVE', field: '--max-plate-length' },
 ];
 
 const piece = (change: Record<string, unknown>) => (good: GoodJob) => ({ ...good, pieces: [{ ...good.pieces[0], ...change }] });
 const ell = { piece: 'S118-02 ell', joint: 'miter', pipe: 'NPS 10 STD', bend: 90, welds: 3, radiusNps: 1.5 };
 const cone = { piece: 'S118-03 cone', joint: 'reducer', large: 'NPS 12 STD', small: 'NPS 8 STD', length: 7, plate: '3/8' };
+const shell = { piece: 'S118-04 shell', joint: 'shell-plate', header: 'NPS 24 STD', length: 96, branches: [{ name: 'N1', branch: 'NPS 6 STD', station: 30, clock: 12 }] };
 const asPiece = (p: Record<string, unknown>, change: Record<string, unknown> = {}) => (good: GoodJob) => ({ ...good, pieces: [{ ...p, ...change }] });
 
 /** Bad job files. */
@@ -278,6 +285,18 @@ export const BAD_JOBS: readonly BadJobCase[] = [
   { name: 'an unknown development surface', job: (g) => ({ ...g, developOn: 'id' }), code: 'BAD_CHOICE', field: 'developOn' },
   { name: 'an unknown DXF text form', job: (g) => ({ ...g, dxfText: 'bold' }), code: 'BAD_CHOICE', field: 'dxfText' },
   { name: 'an unknown DXF curve form', job: (g) => ({ ...g, dxfCurves: 'splines' }), code: 'BAD_CHOICE', field: 'dxfCurves' },
+  {
+    name: 'shell plate holes overlapping',
+    job: asPiece(shell, { branches: [...shell.branches, { name: 'N2', branch: 'NPS 6 STD', station: 33, clock: 12 }] }),
+    code: 'HOLES_OVERLAP',
+    field: 'pieces[0].branches[1]',
+  },
+  { name: 'shell plate hole off the shell end', job: asPiece(shell, { branches: [{ ...shell.branches[0], station: 1 }] }), code: 'OUT_OF_RANGE', field: 'pieces[0].branches[0].station' },
+  { name: 'shell plate branch at 0 degrees', job: asPiece(shell, { branches: [{ ...shell.branches[0], angle: 0 }] }), code: 'OUT_OF_RANGE', field: 'pieces[0].branches[0].angle' },
+  { name: 'shell plate branch clock at 14', job: asPiece(shell, { branches: [{ ...shell.branches[0], clock: 14 }] }), code: 'OUT_OF_RANGE', field: 'pieces[0].branches[0].clock' },
+  { name: 'shell plate branch without a name', job: asPiece(shell, { branches: [{ ...shell.branches[0], name: '' }] }), code: 'EMPTY_INPUT', field: 'pieces[0].branches[0].name' },
+  { name: 'shell plate seam clock as text', job: asPiece(shell, { seamClock: 'three' }), code: 'NOT_A_NUMBER', field: 'pieces[0].seamClock' },
+  { name: 'shell plate negative weld zone', job: asPiece(shell, { weldZone: -1 }), code: 'NEGATIVE', field: 'pieces[0].weldZone' },
   { name: 'a seam on a concentric cone', job: asPiece(cone, { seam: 'opposite' }), code: 'BAD_OPTION', field: 'pieces[0].seam' },
   { name: 'both welds and pieces', job: asPiece(ell, { pieces: 4 }), code: 'BAD_OPTION', field: 'pieces[0].pieces' },
   { name: 'one surface override', job: piece({ headerSurface: 'inside' }), code: 'MISSING_INPUT', field: 'pieces[0].branchSurface' },

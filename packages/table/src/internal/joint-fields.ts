@@ -4,7 +4,7 @@
  * converted by its quantity: lengths to the result's unit, angles in degrees,
  * counts as they are. Internal to the package; `toResultJson` is the way in.
  */
-import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, NozzleLayout, PadLayout, PlaneCutLayout, TrunnionLayout } from '@girth/unroll';
+import type { BranchLayout, ConeLayout, LayoutResult, MiterLayout, NozzleLayout, PadLayout, PlaneCutLayout, ShellPlateLayout, TrunnionLayout } from '@girth/unroll';
 
 /** How the contract writes one number: by its quantity, naming its field in errors. */
 export interface FieldWriters {
@@ -62,6 +62,26 @@ function padFields(r: PadLayout, w: FieldWriters): Record<string, unknown> {
     width: w.length(r.widthMm, 'widthMm'),
     midRadius: w.length(r.midRadiusMm, 'midRadiusMm'),
     stationCount: w.count(r.stations, 'stations'),
+  };
+}
+
+function shellPlateFields(r: ShellPlateLayout, w: FieldWriters): Record<string, unknown> {
+  return {
+    length: w.length(r.lengthMm, 'lengthMm'),
+    thickness: w.length(r.thicknessMm, 'thicknessMm'),
+    plateWidth: w.length(r.plateWidthMm, 'plateWidthMm'),
+    courses: w.count(r.courses, 'courses'),
+    courseLength: w.length(r.courseLengthMm, 'courseLengthMm'),
+    seamClock: w.count(r.seamClockHours, 'seamClockHours'),
+    weldZone: w.length(r.weldZoneMm, 'weldZoneMm'),
+    holes: r.holes.map((h, i) => ({
+      name: String(h.name),
+      course: w.count(h.course, `holes[${i}].course`),
+      girth: w.length(h.girthMm, `holes[${i}].girthMm`),
+      axial: w.length(h.axialMm, `holes[${i}].axialMm`),
+      station: w.length(h.stationMm, `holes[${i}].stationMm`),
+      clock: w.count(h.clockHours, `holes[${i}].clockHours`),
+    })),
   };
 }
 
@@ -188,6 +208,8 @@ export function jointFields(result: LayoutResult, w: FieldWriters): Record<strin
       return trunnionFields(result, w);
     case 'pad':
       return padFields(result, w);
+    case 'shell-plate':
+      return shellPlateFields(result, w);
     default:
       return {};
   }
