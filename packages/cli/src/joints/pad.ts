@@ -4,7 +4,7 @@
  */
 import { JOINT_ANGLE_DEG, rangeText } from '@girth/pipes';
 import type { PadLayout } from '@girth/unroll';
-import { numberOption, optionalChoice, requireOption, stringOption } from '../args.js';
+import { numberOption, optionalChoice, requireOption, stringOption } from '../option-values.js';
 import { reportLength } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe } from './read-inputs.js';

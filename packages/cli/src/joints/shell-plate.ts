@@ -4,7 +4,7 @@
  */
 import { GirthError, JOINT_ANGLE_DEG, rangeText } from '@girth/pipes';
 import type { ShellPlateLayout } from '@girth/unroll';
-import { numberOption, requireOption, stringOption } from '../args.js';
+import { numberOption, requireOption, stringOption } from '../option-values.js';
 import { reportLength } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe, renameField } from './read-inputs.js';
