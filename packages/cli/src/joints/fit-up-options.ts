@@ -7,7 +7,8 @@
 import type { FormatLengthOptions } from '@girth/pipes';
 import type { z as Zod } from 'zod';
 import type { AngleCheckOptions, JointFitUp, LayoutResultBase, OrdinateReference } from '@girth/unroll';
-import { optionalChoice, stringOption, type OptionSpec, type ParsedArgs } from '../args.js';
+import { optionalChoice, stringOption } from '../option-values.js';
+import type { OptionSpec, ParsedArgs } from '../args.js';
 import { optional, type LayoutLibrary, type SchemaKit } from './definition.js';
 import { readLength } from './read-inputs.js';
 import type { JointContext, WrittenLength } from './types.js';

@@ -3,7 +3,7 @@
  */
 import { HEAD_RATIO, NOZZLE_TILT_DEG, rangeText } from '@girth/pipes';
 import type { NozzleLayout } from '@girth/unroll';
-import { numberOption, optionalChoice, requireOption, stringOption } from '../args.js';
+import { numberOption, optionalChoice, requireOption, stringOption } from '../option-values.js';
 import { reportLength } from '../report-style.js';
 import { defineJoint, optional } from './definition.js';
 import { readLength, readPipe, renameField } from './read-inputs.js';

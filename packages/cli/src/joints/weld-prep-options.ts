@@ -6,7 +6,8 @@
  */
 import { GirthError } from '@girth/pipes';
 import type { GrooveSpec } from '@girth/geometry';
-import { numberOption, stringOption, type OptionSpec, type ParsedArgs } from '../args.js';
+import { numberOption, stringOption } from '../option-values.js';
+import type { OptionSpec, ParsedArgs } from '../args.js';
 import type { z as Zod } from 'zod';
 import type { SchemaKit } from './definition.js';
 import { readLength } from './read-inputs.js';
