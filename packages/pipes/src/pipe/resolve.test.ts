@@ -127,7 +127,8 @@ describe('resolvePipe: labels read back to the same pipe', () => {
             again = resolvePipe(first.label);
           } catch (e) {
             expect(e).toBeInstanceOf(GirthError);
-            expect((e as GirthError).code).toMatch(/NEGATIVE|WALL_TOO_THICK/);
+            // The label is rounded: a wall that rounds to nothing, or an OD at the 3 mm limit that rounds just under it.
+            expect((e as GirthError).code).toMatch(/NEGATIVE|WALL_TOO_THICK|OUT_OF_RANGE/);
             return;
           }
           const resolution = unit === 'mm' ? 0.0005 : 0.0005 * IN;
