@@ -78,10 +78,7 @@ function overlapGroup(r: ByRole, frame: Frame, w: NumberWriter): string {
   const y0 = frame.y(tab.box.maxY);
   const y1 = frame.y(tab.box.minY);
   const stroke = (color: string, mm: number): Attrs => ({ fill: 'none', stroke: color, 'stroke-width': w.len(mm), 'stroke-linecap': 'butt' });
-  const words = (r.texts.get('overlap') ?? []).map((t) => {
-    const turn = t.rotateDeg === 90 ? `rotate(-90 ${w.len(frame.x(t.pivot[0]))} ${w.len(frame.y(t.pivot[1]))})` : undefined;
-    return textNode(t, frame, w, { class: 'overlap-text', transform: turn });
-  });
+  const words = (r.texts.get('overlap') ?? []).map((t) => textNode(t, frame, w, { class: 'overlap-text', transform: turn(t, frame, w) }));
   return el('g', { id: 'overlap', class: 'overlap' }, [
     el('path', { class: 'overlap-hatch', d: segmentsData(r.paths.get('overlap-hatch') ?? [], frame, w), ...stroke(INK.light, STROKE_MM.overlapHatch) }),
     el('rect', { class: 'overlap-tab', x: w.len(x0), y: w.len(y0), width: w.len(x1 - x0), height: w.len(y1 - y0), ...stroke(INK.mid, STROKE_MM.overlapOutline) }),
